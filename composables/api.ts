@@ -1,0 +1,21 @@
+/** The human message of a failed $fetch: the server's `message`, else a generic line. */
+export function errorMessage(error: unknown): string {
+  const e = error as { data?: { message?: string }; statusMessage?: string; message?: string }
+  return e?.data?.message || e?.statusMessage || e?.message || 'Something went wrong. Try again.'
+}
+
+/** The HTTP status of a failed $fetch, or 0 when the server was not reached. */
+export function errorStatus(error: unknown): number {
+  const e = error as { statusCode?: number; status?: number; response?: { status?: number } }
+  return e?.statusCode ?? e?.status ?? e?.response?.status ?? 0
+}
+
+/** Runs a request and shows its error as a toast; returns null on failure. */
+export async function withToast<T>(request: () => Promise<T>): Promise<T | null> {
+  try {
+    return await request()
+  } catch (error) {
+    useToastStore().push('error', errorMessage(error))
+    return null
+  }
+}

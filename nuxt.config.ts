@@ -1,0 +1,50 @@
+import { fileURLToPath } from 'node:url'
+
+const fontsDir = fileURLToPath(new URL('./fonts', import.meta.url))
+
+// Kernwise: root-level Nuxt 4 layout (pages/, components/, server/, shared/ at the top).
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  srcDir: '.',
+  dir: { app: 'app' },
+  devtools: { enabled: false },
+  telemetry: false,
+  modules: ['@pinia/nuxt', '@nuxtjs/tailwindcss', 'nuxt-auth-utils'],
+  css: ['~/assets/css/main.css'],
+  app: {
+    head: {
+      title: 'Kernwise',
+      htmlAttrs: { lang: 'en' },
+      meta: [
+        { name: 'viewport', content: 'width=device-width, initial-scale=1' },
+        { name: 'description', content: 'Sketch odd cross-sections, load them, and read stress, neutral line and core live.' },
+      ],
+      link: [
+        { rel: 'icon', type: 'image/svg+xml', href: '/kernwise-mark.svg' },
+        { rel: 'preload', as: 'font', type: 'font/woff2', href: '/fonts/ibm-plex-sans-latin-400-normal.woff2', crossorigin: '' },
+      ],
+    },
+  },
+  runtimeConfig: {
+    // Overridden at run time by NUXT_DB_PATH, NUXT_SEED_DEMO, NUXT_SESSION_PASSWORD.
+    dbPath: '.data/kernwise.sqlite',
+    seedDemo: false,
+    session: {
+      name: 'kernwise-session',
+      password: '',
+      maxAge: 60 * 60 * 24 * 7,
+    },
+  },
+  tailwindcss: {
+    cssPath: false,
+    configPath: 'tailwind.config.ts',
+  },
+  nitro: {
+    publicAssets: [{ dir: fontsDir, baseURL: '/fonts', maxAge: 60 * 60 * 24 * 365 }],
+    serverAssets: [{ baseName: 'fonts', dir: fontsDir }],
+  },
+  vite: {
+    optimizeDeps: { include: ['vue-konva', 'konva', 'polygon-clipping', 'clipper-lib', 'd3-scale', 'd3-contour'] },
+  },
+  typescript: { strict: true },
+})

@@ -1,0 +1,34 @@
+import { Op } from 'sequelize'
+import { IdParams } from '../../../shared/auth/schemas'
+import { UpdateSketchBody } from '../../../shared/sketch/api'
+
+/**
+ * Saves changes to one of my sketches. The body carries the `version` it edited; when the
+ * sketch was saved elsewhere since, the answer is 409 and nothing changes (no lost update).
+ */
+export default defineEventHandler(async (event) => {
+  const user = await requireRole(event, 'editSketches')
+  const { id } = await paramsAs(event, IdParams)
+  const body = await readBodyAs(event, UpdateSketchBody)
+  const sketch = await findOwnSketch(event, user, id)
+  const changes: Record<string, unknown> = {}
+  if (body.title !== undefined) changes.title = body.title
+  if (body.project !== undefined) changes.project = body.project
+  if (body.description !== undefined) changes.description = body.description
+  if (body.document !== undefined) changes.document = JSON.stringify(body.document)
+  const db = await useDb()
+  // Compare-and-set on the version in one statement, so two saves cannot both win.
+  const [count] = await db.Sketch.update(
+    { ...changes, version: body.version + 1 },
+    { where: { id: sketch.id, ownerId: user.id, version: body.version, deletedAt: { [Op.is]: null } } },
+  )
+  if (count === 0) {
+    throw createError({
+      statusCode: 409,
+      message: `This sketch was saved elsewhere (now version ${sketch.version}, you edited version ${body.version}). Reload it, or keep your work as a copy.`,
+      data: { currentVersion: sketch.version },
+    })
+  }
+  await sketch.reload()
+  return sketchJson(sketch, true)
+})

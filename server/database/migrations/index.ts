@@ -1,0 +1,11 @@
+import * as m0001 from './0001-accounts'
+import * as m0002 from './0002-sketches'
+
+/**
+ * Every migration, in order. A static list (not a file glob) because the production server is
+ * bundled and has no migration files on disk. Add new ones at the end; never edit a landed one.
+ */
+export const migrations = [
+  { name: '0001-accounts', ...m0001 },
+  { name: '0002-sketches', ...m0002 },
+]

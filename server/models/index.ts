@@ -1,0 +1,24 @@
+import type { Sequelize } from 'sequelize'
+import { initApiToken } from './api-token'
+import { initLoginFailure } from './login-failure'
+import { initSketch } from './sketch'
+import { initUser } from './user'
+
+/** Binds every model to the connection and wires the associations. */
+export function initModels(sequelize: Sequelize) {
+  const User = initUser(sequelize)
+  const ApiToken = initApiToken(sequelize)
+  const LoginFailure = initLoginFailure(sequelize)
+  const Sketch = initSketch(sequelize)
+  User.hasMany(ApiToken, { foreignKey: 'userId', onDelete: 'CASCADE' })
+  ApiToken.belongsTo(User, { foreignKey: 'userId' })
+  User.hasMany(Sketch, { foreignKey: 'ownerId', onDelete: 'CASCADE' })
+  Sketch.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' })
+  return { sequelize, User, ApiToken, LoginFailure, Sketch }
+}
+
+export type Db = ReturnType<typeof initModels>
+export { ApiToken } from './api-token'
+export { LoginFailure } from './login-failure'
+export { Sketch } from './sketch'
+export { User } from './user'

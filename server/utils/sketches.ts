@@ -1,0 +1,34 @@
+import type { H3Event } from 'h3'
+import { SketchDocumentSchema, migrateDocument, type SketchDocument } from '../../shared/sketch/document'
+import type { Sketch, User } from '../models'
+
+/** Parses a stored document, upgrading older schemas on the way. */
+export function readDocument(text: string): SketchDocument {
+  return SketchDocumentSchema.parse(migrateDocument(JSON.parse(text)))
+}
+
+/** The API face of a sketch, with or without its document. */
+export function sketchJson(sketch: Sketch, withDocument: boolean) {
+  const document = readDocument(sketch.document)
+  const base = {
+    id: sketch.id,
+    title: sketch.title,
+    project: sketch.project,
+    description: sketch.description,
+    status: sketch.status,
+    version: sketch.version,
+    ownerId: sketch.ownerId,
+    createdAt: sketch.createdAt,
+    updatedAt: sketch.updatedAt,
+    partCount: document.parts.length,
+  }
+  return withDocument ? { ...base, document } : base
+}
+
+/** One of the caller's own (not deleted) sketches, or 404: someone else's sketch does not exist for them. */
+export async function findOwnSketch(event: H3Event, user: User, id: string, { deleted = false } = {}): Promise<Sketch> {
+  const db = await useDb()
+  const sketch = await db.Sketch.findOne({ where: { id, ownerId: user.id } })
+  if (!sketch || (!!sketch.deletedAt !== deleted)) throw createError({ statusCode: 404, message: 'Sketch not found' })
+  return sketch
+}

@@ -1,0 +1,37 @@
+import type { H3Event } from 'h3'
+import type { z } from 'zod'
+
+/** Turns zod issues into one sentence a person can act on: "email: Enter a valid e-mail address". */
+export function describeIssues(error: z.ZodError): string {
+  return error.issues
+    .slice(0, 5)
+    .map((issue) => {
+      const path = issue.path.map(String).join('.')
+      return path ? `${path}: ${issue.message}` : issue.message
+    })
+    .join('; ')
+}
+
+/** Parses `value` with `schema` or throws a 400 `{statusCode, message}` naming each bad field. */
+export function parseOr400<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  const result = schema.safeParse(value)
+  if (!result.success) {
+    throw createError({ statusCode: 400, statusMessage: 'Bad Request', message: describeIssues(result.error) })
+  }
+  return result.data
+}
+
+/** readValidatedBody with Kernwise's error messages; an unreadable body is a 400 too. */
+export async function readBodyAs<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.output<S>> {
+  return readValidatedBody(event, body => parseOr400(schema, body ?? {}))
+}
+
+/** getValidatedRouterParams with Kernwise's error messages. */
+export async function paramsAs<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.output<S>> {
+  return getValidatedRouterParams(event, params => parseOr400(schema, params))
+}
+
+/** getValidatedQuery with Kernwise's error messages. */
+export async function queryAs<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.output<S>> {
+  return getValidatedQuery(event, query => parseOr400(schema, query))
+}

@@ -1,0 +1,48 @@
+import { z } from 'zod'
+import { ROLES } from './roles'
+
+/** Minimum password length (also shown on the register page). */
+export const MIN_PASSWORD = 10
+
+/** E-mail as typed; stored trimmed and lower-cased so one person has one account. */
+export const Email = z
+  .string({ error: 'Enter an e-mail address' })
+  .trim()
+  .toLowerCase()
+  .max(254, 'An e-mail address has at most 254 characters')
+  .pipe(z.email({ error: 'Enter a valid e-mail address, such as name@example.com' }))
+
+export const RegisterBody = z.object({
+  email: Email,
+  password: z
+    .string({ error: 'Choose a password' })
+    .min(MIN_PASSWORD, `The password is too short: use at least ${MIN_PASSWORD} characters`)
+    .max(200, 'The password is too long: use at most 200 characters'),
+  name: z.string({ error: 'Enter your name' }).trim().min(1, 'Enter your name').max(120, 'A name has at most 120 characters'),
+})
+
+export const LoginBody = z.object({
+  email: Email,
+  password: z.string({ error: 'Enter your password' }).min(1, 'Enter your password').max(200),
+})
+
+export const TokenBody = z.object({
+  name: z.string({ error: 'Name the token' }).trim().min(1, 'Name the token, e.g. "laptop scripts"').max(80, 'A token name has at most 80 characters'),
+})
+
+export const RoleBody = z.object({
+  role: z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}` }),
+})
+
+export const IdParams = z.object({
+  id: z.uuid({ error: 'That id is not a valid identifier' }),
+})
+
+/** The account as the API shows it. */
+export interface PublicUser {
+  id: string
+  email: string
+  name: string
+  role: (typeof ROLES)[number]
+  createdAt: string
+}

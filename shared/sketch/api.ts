@@ -1,0 +1,45 @@
+import { z } from 'zod'
+import { SketchDocumentSchema, type SketchDocument } from './document'
+
+const Title = z.string({ error: 'Give the sketch a title' }).trim().min(1, 'Give the sketch a title').max(160, 'A title has at most 160 characters')
+const Project = z.string().trim().max(160, 'A project name has at most 160 characters')
+const Description = z.string().max(5000, 'A description has at most 5000 characters')
+
+export const CreateSketchBody = z.object({
+  title: Title,
+  project: Project.default(''),
+  description: Description.default(''),
+  document: SketchDocumentSchema.optional(),
+})
+
+export const UpdateSketchBody = z.object({
+  version: z.number({ error: 'Send the version you edited (a whole number)' }).int('The version is a whole number').positive(),
+  title: Title.optional(),
+  project: Project.optional(),
+  description: Description.optional(),
+  document: SketchDocumentSchema.optional(),
+})
+
+export const ListSketchesQuery = z.object({
+  q: z.string().max(160).optional(),
+  sort: z.enum(['updated', 'created', 'title', 'project'], { error: 'sort is one of: updated, created, title, project' }).default('updated'),
+  order: z.enum(['asc', 'desc'], { error: 'order is asc or desc' }).optional(),
+})
+
+/** A sketch as the API returns it. */
+export interface SketchSummary {
+  id: string
+  title: string
+  project: string
+  description: string
+  status: string
+  version: number
+  ownerId: string
+  createdAt: string
+  updatedAt: string
+  partCount: number
+}
+
+export interface SketchFull extends SketchSummary {
+  document: SketchDocument
+}

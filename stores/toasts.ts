@@ -1,0 +1,26 @@
+import { defineStore } from 'pinia'
+
+export interface Toast {
+  id: number
+  kind: 'error' | 'info' | 'success'
+  text: string
+}
+
+/** Short-lived messages in the corner: errors from the server, confirmations, undo offers. */
+export const useToastStore = defineStore('toasts', () => {
+  const toasts = ref<Toast[]>([])
+  let next = 1
+
+  function push(kind: Toast['kind'], text: string, ms = kind === 'error' ? 7000 : 3500): number {
+    const id = next++
+    toasts.value.push({ id, kind, text })
+    if (import.meta.client) setTimeout(() => dismiss(id), ms)
+    return id
+  }
+
+  function dismiss(id: number): void {
+    toasts.value = toasts.value.filter(t => t.id !== id)
+  }
+
+  return { toasts, push, dismiss }
+})

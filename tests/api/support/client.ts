@@ -1,0 +1,39 @@
+/** A tiny HTTP client for API tests: JSON in and out, one cookie jar per client. */
+export class Client {
+  private cookies = new Map<string, string>()
+  constructor(private readonly base: () => string, private readonly token?: string) {}
+
+  /** A client that authenticates with `Authorization: Bearer <token>` instead of cookies. */
+  withToken(token: string): Client {
+    return new Client(this.base, token)
+  }
+
+  async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
+    const h: Record<string, string> = { accept: 'application/json', ...headers }
+    if (body !== undefined && typeof body !== 'string') h['content-type'] = 'application/json'
+    if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
+    if (this.token) h.authorization = `Bearer ${this.token}`
+    const res = await fetch(this.base() + path, {
+      method,
+      headers: h,
+      body: body === undefined ? undefined : typeof body === 'string' ? body : JSON.stringify(body),
+    })
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(';')
+      const i = pair!.indexOf('=')
+      const name = pair!.slice(0, i)
+      const value = pair!.slice(i + 1)
+      if (value === '' || /max-age=0/i.test(c) || /expires=Thu, 01 Jan 1970/i.test(c)) this.cookies.delete(name)
+      else this.cookies.set(name, value)
+    }
+    const text = await res.text()
+    let json: any = null
+    try { json = text ? JSON.parse(text) : null } catch { json = { raw: text } }
+    return { status: res.status, body: json, headers: res.headers, text }
+  }
+
+  get(path: string) { return this.request('GET', path) }
+  post(path: string, body?: unknown) { return this.request('POST', path, body ?? {}) }
+  patch(path: string, body?: unknown) { return this.request('PATCH', path, body ?? {}) }
+  delete(path: string) { return this.request('DELETE', path) }
+}
