@@ -1,0 +1,27 @@
+import { mkdirSync } from 'node:fs'
+import { expect, type Page } from '@playwright/test'
+
+/** Screenshots kept as artifacts of the run (looked at by a person, not compared). */
+export const ARTIFACTS = 'e2e/artifacts'
+
+export async function shot(page: Page, name: string): Promise<void> {
+  mkdirSync(ARTIFACTS, { recursive: true })
+  await page.screenshot({ path: `${ARTIFACTS}/${name}.png`, fullPage: false })
+}
+
+/** Opens a page and waits until Vue has hydrated it (clicks before that are lost). */
+export async function open(page: Page, path: string): Promise<void> {
+  await page.goto(path)
+  await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
+}
+
+export const DEMO_PASSWORD = 'millrace-demo-2026'
+
+/** Signs in through the form as a demo account. */
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await open(page, '/sign-in')
+  await page.getByLabel('E-mail').fill(email)
+  await page.getByLabel('Password').fill(password)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+  await expect(page.getByTestId('sign-out')).toBeVisible()
+}
