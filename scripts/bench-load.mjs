@@ -1,0 +1,47 @@
+// npm run bench:load: autocannon on loopback against the built server with a temporary database.
+// Prints requests/s and latency percentiles for health, a sketch list and 1 000-vertex analyses.
+import { mkdtempSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import autocannon from 'autocannon'
+import { buildIfStale, freePort, startServer } from './lib.mjs'
+
+const DURATION = Number(process.env.BENCH_SECONDS || 8)
+
+function ring(n, r) {
+  const pts = []
+  for (let i = 0; i < n; i++) {
+    const t = (2 * Math.PI * i) / n
+    pts.push([r * Math.cos(t), r * Math.sin(t)])
+  }
+  return pts
+}
+
+async function run(url, title, opts) {
+  const result = await autocannon({ url, connections: 10, duration: DURATION, ...opts })
+  const l = result.latency
+  console.log(`${title} req_per_s=${result.requests.average.toFixed(0)} p50_ms=${l.p50} p99_ms=${l.p99} errors=${result.errors + result.non2xx}`)
+  return result
+}
+
+buildIfStale()
+const dir = mkdtempSync(join(tmpdir(), 'kernwise-load-'))
+const port = await freePort()
+const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef' })
+try {
+  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
+  const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
+  const tok = await (await fetch(`${url}/api/tokens`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify({ name: 'bench' }) })).json()
+  const auth = { authorization: `Bearer ${tok.token}`, 'content-type': 'application/json' }
+  for (let i = 0; i < 20; i++) await fetch(`${url}/api/sketches`, { method: 'POST', headers: auth, body: JSON.stringify({ title: `Bench ${i}` }) })
+  const body = JSON.stringify({ parts: [{ outline: ring(1000, 200), holes: [], material: { E: 200000 } }], loads: [{ P: 320000, x: 40, y: 25 }] })
+
+  const health = await run(`${url}/api/health`, 'health')
+  await run(`${url}/api/sketches`, 'sketch-list', { headers: auth })
+  const analysis = await run(`${url}/api/analysis`, 'analysis-1000-vertices', { method: 'POST', headers: auth, body })
+  const ratio = health.latency.p50 > 0 ? analysis.latency.p50 / health.latency.p50 : NaN
+  console.log(`analysis-vs-health p50_ratio=${Number.isFinite(ratio) ? ratio.toFixed(2) : 'n/a'} (a 1 000-vertex analysis costs this many health checks)`)
+} finally {
+  child.kill('SIGTERM')
+  rmSync(dir, { recursive: true, force: true })
+}

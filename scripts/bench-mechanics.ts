@@ -1,0 +1,101 @@
+// npm run bench: mechanics timings for 1 000, 100 000 and 1 000 000 vertices, then 200 000 vertices
+// end to end through POST /api/analysis on the built server (loopback).
+import { mkdtempSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { performance } from 'node:perf_hooks'
+import { findSelfIntersection } from '../shared/geometry/intersections'
+import { polygonMoments, zeroMoments } from '../shared/geometry/moments'
+import type { Point } from '../shared/geometry/types'
+import { solveContact } from '../shared/mechanics/contact'
+import { kernPolygon } from '../shared/mechanics/kern'
+import { prepareSection } from '../shared/mechanics/prepare'
+import { sectionProperties } from '../shared/mechanics/properties'
+// @ts-expect-error plain ESM helper without types
+import { buildIfStale, freePort, startServer } from './lib.mjs'
+
+/** A star-free wavy ring of n vertices (simple, not convex), radius about r mm. */
+function wavyRing(n: number, r: number): Point[] {
+  const pts: Point[] = []
+  for (let i = 0; i < n; i++) {
+    const t = (2 * Math.PI * i) / n
+    const rr = r * (1 + 0.05 * Math.sin(7 * t))
+    // Rounded to 1 µm so that 200 000 vertices fit the 5 MB body limit as JSON.
+    pts.push([Math.round(rr * Math.cos(t) * 1000) / 1000, Math.round(rr * Math.sin(t) * 1000) / 1000])
+  }
+  return pts
+}
+
+/** Median time (ms) of `fn` over repeated runs, at least `minRuns` and about `budgetMs` in all. */
+function time(fn: () => unknown, minRuns = 3, budgetMs = 1500): number {
+  const times: number[] = []
+  const start = performance.now()
+  while (times.length < minRuns || (performance.now() - start < budgetMs && times.length < 50)) {
+    const t0 = performance.now()
+    fn()
+    times.push(performance.now() - t0)
+  }
+  times.sort((a, b) => a - b)
+  return times[Math.floor(times.length / 2)]!
+}
+
+const fmt = (ms: number) => ms.toFixed(ms < 10 ? 3 : 1)
+
+for (const n of [1_000, 100_000, 1_000_000]) {
+  const ring = wavyRing(n, 500)
+  const parts = [{ outline: ring, material: { E: 200_000 } }]
+  const prepared = prepareSection(parts)
+  const props = sectionProperties(prepared)
+  const regions = prepared.regions.map(r => ({ n: r.n, polygons: r.polygons }))
+  const polygons = prepared.regions.flatMap(r => r.polygons)
+  const tMoments = time(() => {
+    const acc = zeroMoments()
+    for (const poly of polygons) polygonMoments(poly, prepared.origin, 1, acc)
+    return acc
+  })
+  const tProps = time(() => sectionProperties(prepared))
+  const tPrepare = time(() => prepareSection(parts), 2)
+  const tCheck = time(() => findSelfIntersection(ring), 2)
+  const tKern = time(() => kernPolygon(props, prepared.hull))
+  // A load outside the core but inside the hull: partial contact.
+  const loads = [{ P: 1e6, x: props.centroid.x + 300, y: props.centroid.y + 120 }]
+  const tContact = time(() => solveContact(props, regions, prepared.hull, loads), 2)
+  const mvps = n / (tMoments / 1000) / 1e6
+  console.log(`mechanics vertices=${n} moments_pass_ms=${fmt(tMoments)} moments_Mvertex_per_s=${mvps.toFixed(1)} all_properties_ms=${fmt(tProps)} self_intersection_ms=${fmt(tCheck)} prepare_ms=${fmt(tPrepare)} kern_ms=${fmt(tKern)} no_tension_ms=${fmt(tContact)}`)
+}
+
+// End to end: 200 000 vertices through the API (JSON encode, HTTP, validate, prepare, analyse, answer).
+buildIfStale()
+const dir = mkdtempSync(join(tmpdir(), 'kernwise-bench-'))
+const port = await freePort()
+const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'bench.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef' })
+try {
+  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@mech.test', password: 'bench-password-123', name: 'Bench' }) })
+  const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
+  const post = async (body: string) => {
+    const t0 = performance.now()
+    const res = await fetch(`${url}/api/analysis`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body })
+    await res.text()
+    if (res.status !== 200) throw new Error(`analysis answered ${res.status}`)
+    return performance.now() - t0
+  }
+  const health = async () => {
+    const t0 = performance.now()
+    await (await fetch(`${url}/api/health`)).text()
+    return performance.now() - t0
+  }
+  const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!
+  for (const n of [1_000, 200_000]) {
+    const body = JSON.stringify({ parts: [{ outline: wavyRing(n, 500) }], loads: [{ P: 320_000, x: 40, y: 25 }], noTension: true })
+    await post(body) // warm-up
+    const runs: number[] = []
+    for (let i = 0; i < (n > 10_000 ? 5 : 30); i++) runs.push(await post(body))
+    console.log(`api-analysis vertices=${n} median_ms=${fmt(median(runs))} max_ms=${fmt(Math.max(...runs))}`)
+  }
+  const hs: number[] = []
+  for (let i = 0; i < 30; i++) hs.push(await health())
+  console.log(`api-health median_ms=${fmt(median(hs))}`)
+} finally {
+  child.kill('SIGTERM')
+  rmSync(dir, { recursive: true, force: true })
+}
