@@ -1,43 +1,9 @@
 import { describe, expect, it } from 'vitest'
 import type { Ring } from '../../../shared/geometry/types'
 import { shearFlows } from '../../../shared/mechanics/shear'
-import type { InertiaLike } from '../../../shared/mechanics/stress'
 import { SectionError } from '../../../shared/mechanics/types'
 import { expectClose } from '../../support/expect-close'
-
-type Rect = readonly [x0: number, y0: number, x1: number, y1: number]
-
-function rectRing([x0, y0, x1, y1]: Rect): Ring {
-  return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]]
-}
-
-/** Parallel-axis theorem by hand over rectangles (notes §10): A, centroid, Ixx, Iyy, Ixy. */
-function composite(rects: readonly Rect[]): InertiaLike {
-  let A = 0
-  let Sx = 0
-  let Sy = 0
-  for (const [x0, y0, x1, y1] of rects) {
-    const a = (x1 - x0) * (y1 - y0)
-    A += a
-    Sx += (a * (x0 + x1)) / 2
-    Sy += (a * (y0 + y1)) / 2
-  }
-  const xc = Sx / A
-  const yc = Sy / A
-  let Ixx = 0
-  let Iyy = 0
-  let Ixy = 0
-  for (const [x0, y0, x1, y1] of rects) {
-    const b = x1 - x0
-    const h = y1 - y0
-    const dx = (x0 + x1) / 2 - xc
-    const dy = (y0 + y1) / 2 - yc
-    Ixx += (b * h ** 3) / 12 + b * h * dy * dy
-    Iyy += (h * b ** 3) / 12 + b * h * dx * dx
-    Ixy += b * h * dx * dy
-  }
-  return { area: A, centroid: { x: xc, y: yc }, Ixx, Iyy, Ixy }
-}
+import { composite, rectRing, type Rect } from '../../support/sections'
 
 describe('shearFlows', () => {
   // Built-up I: flange plates 200×20, web plate 10×360, overall depth 400.

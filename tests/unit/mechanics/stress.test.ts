@@ -14,6 +14,7 @@ import {
 import type { InertiaLike } from '../../../shared/mechanics/stress'
 import { SectionError } from '../../../shared/mechanics/types'
 import { expectClose } from '../../support/expect-close'
+import { composite } from '../../support/sections'
 
 /** Axis-aligned rectangle ring, CCW. */
 function rect(x0: number, y0: number, x1: number, y1: number): Ring {
@@ -25,33 +26,6 @@ function rectProps(b: number, h: number, cx = 0, cy = 0): InertiaLike {
   return { area: b * h, centroid: { x: cx, y: cy }, Ixx: (b * h ** 3) / 12, Iyy: (h * b ** 3) / 12, Ixy: 0 }
 }
 
-/** Parallel-axis theorem by hand over axis-aligned rectangles [x0, y0, x1, y1] (notes §10). */
-function composite(rects: readonly (readonly [number, number, number, number])[]): InertiaLike {
-  let A = 0
-  let Sx = 0
-  let Sy = 0
-  for (const [x0, y0, x1, y1] of rects) {
-    const a = (x1 - x0) * (y1 - y0)
-    A += a
-    Sx += a * (x0 + x1) / 2
-    Sy += a * (y0 + y1) / 2
-  }
-  const xc = Sx / A
-  const yc = Sy / A
-  let Ixx = 0
-  let Iyy = 0
-  let Ixy = 0
-  for (const [x0, y0, x1, y1] of rects) {
-    const b = x1 - x0
-    const h = y1 - y0
-    const dx = (x0 + x1) / 2 - xc
-    const dy = (y0 + y1) / 2 - yc
-    Ixx += (b * h ** 3) / 12 + b * h * dy * dy
-    Iyy += (h * b ** 3) / 12 + b * h * dx * dx
-    Ixy += b * h * dx * dy
-  }
-  return { area: A, centroid: { x: xc, y: yc }, Ixx, Iyy, Ixy }
-}
 
 const at = (plane: { a: number; b: number; c: number }, x: number, y: number) => plane.a + plane.b * x + plane.c * y
 
