@@ -1,4 +1,4 @@
-import { orient2d } from './intersections'
+import { orient2d } from './orient'
 import type { Point, Ring } from './types'
 
 /**

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { convexHull, ringsHull } from '../../../shared/geometry/hull'
-import { findSelfIntersection, orient2d } from '../../../shared/geometry/intersections'
+import { findSelfIntersection } from '../../../shared/geometry/intersections'
+import { orient2d } from '../../../shared/geometry/orient'
 import { ringArea } from '../../../shared/geometry/moments'
 import type { Point } from '../../../shared/geometry/types'
 

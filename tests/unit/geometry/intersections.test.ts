@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { findRingsIntersection, findSelfIntersection, orient2d } from '../../../shared/geometry/intersections'
+import { findRingsIntersection, findSelfIntersection } from '../../../shared/geometry/intersections'
+import { orient2d } from '../../../shared/geometry/orient'
 import type { Point } from '../../../shared/geometry/types'
 
 /** Regular n-gon of circumradius r (mm), CCW. */
