@@ -22,7 +22,7 @@ export function buildIfStale({ force = false } = {}) {
   const marker = join(root, '.output', 'nitro.json')
   const built = existsSync(marker) ? statSync(marker).mtimeMs : 0
   const src = Math.max(...SOURCES.map(s => newest(join(root, s))))
-  if (!force && built > src) {
+  if (!force && (built > src || (built > 0 && process.env.KERNWISE_SKIP_BUILD === '1'))) {
     console.log('[kernwise] .output is up to date; skipping the build')
     return
   }
