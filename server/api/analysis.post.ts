@@ -16,7 +16,11 @@ export default defineEventHandler(async (event) => {
     throw createError({ statusCode: 413, message: `The section has ${vertices} vertices; the limit is ${MAX_VERTICES}. Use a coarser chord tolerance for arcs.` })
   }
   const result = withSectionErrors(() => analyseSection(body))
-  if (!allFinite(result)) {
+  // Vertex coordinates come from the (finite) input and vertex stresses are n times a plane whose
+  // coefficients are checked here, so the walk can skip the two large arrays.
+  const { regions: _regions, stress, ...rest } = result
+  const summary = stress ? { ...stress, vertices: [] } : null
+  if (!allFinite(rest) || !allFinite(summary)) {
     // A degenerate case slipped through the engine's own checks: say so instead of sending NaN.
     throw createError({ statusCode: 422, message: 'The section is too degenerate to analyse (a result was not finite). Check for sliver parts or zero-thickness walls.' })
   }
