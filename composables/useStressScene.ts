@@ -1,0 +1,151 @@
+import type { Bounds, Ring } from '#shared/geometry/types'
+import { envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient } from '#shared/stress/field'
+import { formatNumber, formatStress, STRESS_COLOURS } from '#shared/stress/scale'
+import { emptyScene, type StressScene } from './useStressPaint'
+
+/**
+ * The stress overlay's scene for the current frame (mm): exact gradients or envelope bands, isolines,
+ * the neutral or lift-off line across the view, the core, extremes, where tension starts, the
+ * resultant, load labels, snap guides and the cut line. Pure data: StressFieldLayer paints it.
+ */
+export function useStressScene(zoom: () => number, viewBox: () => Bounds | null) {
+  const view = useStressView()
+  return computed<StressScene>(() => {
+    const s = emptyScene()
+    const f = view.frame.value
+    const sec = view.section.value
+    if (!sec) return s
+    const u = view.units.value
+    const scale = view.scale.value
+    const regions = sec.regions
+    const plane = f.planes[0]
+    const contact = f.kind === 'contact'
+    s.outlines = regions.map(r => r.rings)
+
+    if ((f.kind === 'plane' || contact) && plane) {
+      for (const r of regions) s.fields.push({ rings: r.rings, gradient: planeGradient(plane, r.n, r.rings, scale, contact ? 0 : Infinity), fill: STRESS_COLOURS.neutral })
+      const values = isolineValues(f.min?.value ?? 0, contact ? 0 : (f.max?.value ?? 0), 6, u.stress.perMPa)
+      const tmp: number[] = []
+      values.forEach((v, vi) => {
+        const t = vi % 2 === 0 ? 0.3 : 0.7
+        let bestLen = -1
+        let at: [number, number] | null = null
+        for (const r of regions) {
+          lineInRings(r.rings, r.n * plane.a - v, r.n * plane.b, r.n * plane.c, tmp)
+          for (const q of tmp) s.iso.push(q)
+          const k = longestSegment(tmp)
+          if (k < 0) continue
+          const len = Math.hypot(tmp[4 * k + 2]! - tmp[4 * k]!, tmp[4 * k + 3]! - tmp[4 * k + 1]!)
+          if (len > bestLen) {
+            bestLen = len
+            at = [tmp[4 * k]! + t * (tmp[4 * k + 2]! - tmp[4 * k]!), tmp[4 * k + 1]! + t * (tmp[4 * k + 3]! - tmp[4 * k + 1]!)]
+          }
+        }
+        if (at) s.labels.push({ x: at[0], y: at[1], text: formatStress(v, u), dx: 3, dy: -3, size: 10 })
+      })
+    } else if (f.kind === 'envelope' && f.min && f.max) {
+      const lo = f.min.value
+      const hi = f.max.value
+      const thresholds = [lo, ...isolineValues(lo, hi, 8, u.stress.perMPa), 0].filter((v, i, a) => a.indexOf(v) === i && v >= lo && v <= hi).sort((p, q) => p - q)
+      const worstC = view.envelopeSide.value === 'compression'
+      for (const r of regions) {
+        const env = envelopeBands(boundsOf(r.rings), r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y])
+        s.envelope.push({ rings: r.rings, base: env.base, bands: env.bands })
+        for (const l of env.labels) s.labels.push({ x: l.x, y: l.y, text: formatStress(l.value, u), dx: 3, dy: -3, size: 10 })
+      }
+    }
+
+    const c = sec.props.centroid
+    if (contact && f.contact?.status === 'overturning') {
+      s.labels.push({ x: c.x, y: c.y, text: 'Overturning: the resultant is outside the base', dx: 0, dy: -40, colour: '#95222a', weight: 'bold', size: 14, align: 'center' })
+      s.labels.push({ x: c.x, y: c.y, text: 'no equilibrium exists without tension', dx: 0, dy: -22, colour: '#95222a', size: 12, align: 'center' })
+    }
+    if (sec.kern.length >= 3) {
+      s.core = sec.kern
+      s.coreDots = sec.kern.length <= 400 ? sec.kern : []
+      let bottom = sec.kern[0]!
+      for (const p of sec.kern) if (p[1] < bottom[1]) bottom = p
+      s.labels.push({ x: bottom[0], y: bottom[1], text: 'core', dx: -8, dy: 12, colour: '#116652', align: 'right' })
+    }
+
+    const box = viewBox()
+    if (f.neutral && box) {
+      const pts = lineAcrossBox(f.neutral.a, f.neutral.b, f.neutral.c, box)
+      if (pts) {
+        s.neutral = pts
+        const d = f.neutral.a + f.neutral.b * c.x + f.neutral.c * c.y
+        const text = contact ? 'lift-off line' : f.neutralInSection ? 'neutral line' : 'neutral line (outside the section)'
+        s.labels.push({ x: c.x - d * f.neutral.b, y: c.y - d * f.neutral.c, text, dx: 5, dy: -6, weight: 'bold' })
+      }
+    }
+    if (contact && f.neutral && plane) {
+      // Halfway into the lifted part, on the line through the centroid normal to the lift-off line.
+      // The lift-off line's normal points towards compression: the lifted part is on its negative side.
+      const n = f.neutral
+      let far = 0
+      for (const p of sec.hull) far = Math.min(far, n.a + n.b * p[0] + n.c * p[1])
+      const t = far / 2 - (n.a + n.b * c.x + n.c * c.y)
+      if (far < 0) s.labels.push({ x: c.x + t * n.b, y: c.y + t * n.c, text: 'lifted off: no contact', dx: 0, dy: 4, colour: '#465263', weight: 'italic', align: 'center' })
+    }
+
+    // Extremes, called out at their points.
+    const uniform = f.min && f.max && Math.abs(f.max.value - f.min.value) <= 1e-9 * Math.max(1, Math.abs(f.min.value))
+    if (f.min && f.min.value < 0) {
+      s.dots.push({ x: f.min.x, y: f.min.y, r: 5, fill: STRESS_COLOURS.compression, stroke: '#ffffff' })
+      const text = uniform ? `uniform ${formatStress(f.min.value, u)}` : `max C ${formatStress(f.min.value, u).replace(/ C$/, '')}`
+      s.labels.push({ x: f.min.x, y: f.min.y, text, dx: 8, dy: 16, weight: 'bold' })
+    }
+    if (f.max && !contact && !uniform) {
+      const t = f.max.value > 0
+      s.dots.push({ x: f.max.x, y: f.max.y, r: 5, fill: t ? STRESS_COLOURS.tension : STRESS_COLOURS.compressionLight, stroke: '#ffffff' })
+      const text = t ? `max T ${formatStress(f.max.value, u).replace(/ T$/, '')}` : `least C ${formatStress(f.max.value, u).replace(/ C$/, '')}`
+      s.labels.push({ x: f.max.x, y: f.max.y, text, dx: 8, dy: -8, weight: 'bold' })
+    }
+    if (f.kind === 'plane' && f.onset && (!f.inKern || view.drag.value)) {
+      const o = f.onset
+      s.dots.push({ x: o.x, y: o.y, r: 9, stroke: STRESS_COLOURS.tension, width: 2, dash: [3, 2] })
+      s.labels.push({ x: o.x, y: o.y, text: o.startsInTension ? 'tension starts here' : 'tension would start here', dx: 12, dy: 26, size: 10, colour: '#8a5a00' })
+    }
+
+    // Resultant (in or out of the core) and the loads' labels.
+    const r = f.resultant
+    if (r && r.x !== null && r.y !== null && f.inKern !== null) {
+      const colour = f.inKern ? '#116652' : '#c8323a'
+      s.dots.push({ x: r.x, y: r.y, r: 11, stroke: colour, width: 2.5 })
+      s.labels.push({ x: r.x, y: r.y, text: f.inKern ? 'resultant in core' : 'resultant outside core', dx: 14, dy: -10, colour, weight: 'bold' })
+    }
+    for (const l of view.loads.value) s.labels.push({ x: l.x, y: l.y, text: `${l.name} · ${formatNumber(l.P * u.force.perN)} ${u.force.label}`, dx: 11, dy: 16 })
+    const d = view.drag.value
+    if (d) {
+      const b = sec.props.bounds
+      const L = Math.hypot(b.maxX - b.minX, b.maxY - b.minY)
+      const th = (sec.props.theta * Math.PI) / 180
+      for (const [ux, uy] of [[Math.cos(th), Math.sin(th)], [-Math.sin(th), Math.cos(th)]] as const) s.guides.push(c.x - L * ux, c.y - L * uy, c.x + L * ux, c.y + L * uy)
+      if (view.snap.value) s.labels.push({ x: d.x, y: d.y, text: `snap: ${view.snap.value}`, dx: 11, dy: 30, size: 10, colour: '#116652' })
+    }
+    const cut = view.cut.value
+    if (cut) {
+      s.cut = [...cut.p0, ...cut.p1]
+      s.labels.push({ x: cut.p0[0], y: cut.p0[1], text: 'A', dx: -14, dy: 4, colour: '#95222a', weight: 'bold' })
+      s.labels.push({ x: cut.p1[0], y: cut.p1[1], text: 'B', dx: 6, dy: 4, colour: '#95222a', weight: 'bold' })
+    }
+    void zoom()
+    return s
+  })
+}
+
+function boundsOf(rings: readonly Ring[]): Bounds {
+  let minX = Infinity
+  let minY = Infinity
+  let maxX = -Infinity
+  let maxY = -Infinity
+  for (const ring of rings) {
+    for (const p of ring) {
+      if (p[0] < minX) minX = p[0]
+      if (p[0] > maxX) maxX = p[0]
+      if (p[1] < minY) minY = p[1]
+      if (p[1] > maxY) maxY = p[1]
+    }
+  }
+  return { minX, minY, maxX, maxY }
+}

@@ -1,0 +1,158 @@
+import type { AnalysisResponse } from '#shared/analysis/contract'
+import { loadSetsFor, withLoadAt } from '#shared/loads/combine'
+import type { PointLoad } from '#shared/mechanics/types'
+import { slenderness } from '#shared/mechanics/slenderness'
+import type { SketchDocument } from '#shared/sketch/document'
+import { checkUtilisation } from '#shared/stress/check'
+import { evaluateFrame, type FrameRegion } from '#shared/stress/frame'
+import { displayUnits, stressScale } from '#shared/stress/scale'
+import type { Ring } from '#shared/geometry/types'
+
+/** A material region of the view: FrameRegion plus the limits of its check (MPa). */
+export interface ViewRegion extends FrameRegion {
+  readonly E: number
+  readonly fy: number | null
+  readonly allowable: number | null
+}
+
+/** A cut line drawn by the user (mm, section coordinates). */
+export interface CutLine {
+  p0: [number, number]
+  p1: [number, number]
+}
+
+/**
+ * The live stress view: derived on every drag frame from the last analysis (properties, hull, core,
+ * regions) and the document's loads, with the dragged load's position applied locally. Nothing here
+ * waits for the server; the drag result goes to the store only at the end (`endDrag`).
+ */
+export function createStressView(source?: { analysis?: () => AnalysisResponse | null; doc?: () => SketchDocument }) {
+  const analysisState = source?.analysis ? null : useAnalysis()
+  const store = source?.doc ? null : useSketchStore()
+  const analysis = computed(() => (source?.analysis ? source.analysis() : analysisState!.value.result))
+  const doc = computed(() => toRaw(source?.doc ? source.doc() : store!.doc))
+
+  /** The load being dragged and where it is now (mm), or null. */
+  const drag = shallowRef<{ id: string; x: number; y: number } | null>(null)
+  /** What the dragged load snapped to, for the cue on the canvas. */
+  const snap = shallowRef<string | null>(null)
+  const envelopeSide = ref<'compression' | 'tension'>('compression')
+  const cut = shallowRef<CutLine | null>(null)
+  const cutMode = ref(false)
+  let lastDir: [number, number] = [1, 0]
+  const scratch = new Map<string, PointLoad[]>()
+
+  const section = computed(() => {
+    // Plain data, not reactive proxies: the hot loops below read every vertex on every frame.
+    const a = analysis.value ? toRaw(analysis.value) : null
+    if (!a) return null
+    const parts = doc.value.parts
+    const regions: ViewRegion[] = a.regions.map((r) => {
+      const part = parts.find(p => p.material.name === r.name && p.material.E === r.E)
+      // markRaw: vue-konva deep-watches and stores its configs reactively; big vertex arrays must stay plain.
+      const rings: Ring[] = markRaw(r.polygons.flat().map(ring => markRaw(ring as Ring[number][]) as Ring))
+      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, allowable: part?.material.allowable ?? null }
+    })
+    return { props: a.properties, hull: markRaw(a.hull as Ring[number][]) as Ring, kern: markRaw(a.kern as Ring[number][]) as Ring, regions, shear: a.shear, warnings: a.warnings }
+  })
+
+  const show = computed(() => doc.value.settings.show)
+  const units = computed(() => displayUnits(doc.value.settings.units))
+  const noTension = computed(() => doc.value.settings.noTension || doc.value.parts.some(p => p.material.noTension === true))
+  const baseSets = computed(() => loadSetsFor(show.value, doc.value.loads, doc.value.cases, doc.value.combinations))
+
+  /** The load sets with the drag applied (factored P unchanged). */
+  const sets = computed(() => {
+    const d = drag.value
+    if (!d) return baseSets.value
+    return baseSets.value.map((set) => {
+      let buf = scratch.get(set.key)
+      if (!buf) scratch.set(set.key, (buf = []))
+      return withLoadAt(set, d.id, d.x, d.y, buf)
+    })
+  })
+
+  const frame = computed(() => {
+    const s = section.value
+    if (!s) return evaluateFrame({ props: { area: 0, centroid: { x: 0, y: 0 }, Ixx: 0, Iyy: 0, Ixy: 0 }, hull: [], kern: [], regions: [], sets: [], envelope: false, noTension: false })
+    return evaluateFrame({ props: s.props, hull: s.hull, kern: s.kern, regions: s.regions, sets: sets.value, envelope: show.value.type === 'envelope', noTension: noTension.value }, lastDir)
+  })
+  const scale = computed(() => stressScale(frame.value.limit))
+
+  /**
+   * The frame for the heavier panels (vertex table, checks, cut line): the live frame at rest, and at
+   * most every 120 ms during a drag, so a drag frame only pays for the canvas, core status and extremes.
+   */
+  const settled = shallowRef(frame.value)
+  let settleTimer: ReturnType<typeof setTimeout> | null = null
+  watch(frame, (f) => {
+    if (!drag.value) {
+      settled.value = f
+      return
+    }
+    settleTimer ??= setTimeout(() => {
+      settleTimer = null
+      settled.value = frame.value
+    }, 120)
+  })
+
+  /** The loads drawn on the canvas: those of the shown sets, at the drag position while dragging. */
+  const shownIds = computed(() => new Set(baseSets.value.flatMap(s => s.ids)))
+  const loads = computed(() => {
+    const ids = shownIds.value
+    const d = drag.value
+    return doc.value.loads.filter(l => ids.has(l.id)).map(l => (d && d.id === l.id ? { ...l, x: d.x, y: d.y } : l))
+  })
+
+  const checks = computed(() => {
+    const s = section.value
+    const f = settled.value
+    if (!s || f.planes.length === 0) return []
+    return checkUtilisation(s.regions, f.planes, f.kind === 'contact' ? 0 : Infinity)
+  })
+
+  const slender = computed(() => {
+    const s = section.value
+    const KL = doc.value.settings.effectiveLength
+    if (!s || !KL) return null
+    const P = Math.max(0, ...sets.value.map(set => set.loads.reduce((sum, l) => sum + l.P, 0)))
+    return slenderness(s.props, s.props.referenceE, KL, P)
+  })
+
+  /** Moves the dragged load to (x, y) mm for this frame; remembers the motion's direction. */
+  function setDrag(id: string, x: number, y: number): void {
+    const prev = drag.value
+    if (prev && prev.id === id) {
+      const dx = x - prev.x
+      const dy = y - prev.y
+      if (Math.hypot(dx, dy) > 0) lastDir = [dx, dy]
+    }
+    drag.value = { id, x, y }
+  }
+
+  /** Ends the drag; returns the final position (the caller stores it with moveLoad). */
+  function endDrag(): { id: string; x: number; y: number } | null {
+    const d = drag.value
+    drag.value = null
+    snap.value = null
+    return d
+  }
+
+  return { analysis, doc, section, show, units, noTension, sets, frame, settled, scale, shownIds, loads, checks, slender, drag, snap, envelopeSide, cut, cutMode, setDrag, endDrag }
+}
+
+/** The live stress view state. */
+export type StressView = ReturnType<typeof createStressView>
+
+/**
+ * The one stress view of the open sketch, shared by the canvas layer and every stress panel (so a
+ * drag seen on the canvas is seen in the panels in the same frame). Lives as long as the app.
+ */
+export function useStressView(): StressView {
+  const app = useNuxtApp() as unknown as { _kwStressView?: StressView }
+  if (!app._kwStressView) {
+    const scope = effectScope(true)
+    app._kwStressView = scope.run(() => createStressView())!
+  }
+  return app._kwStressView
+}

@@ -1,0 +1,129 @@
+// npm run bench:ui — how long one drag frame of the live stress view takes in headless chromium.
+// Builds if stale, starts the built server on a free port with a temporary database, signs in as
+// the demo engineer, creates a sketch with an N-vertex section (N = 200, 2 000, 20 000) and one
+// load through the API, drags the load across the core with page.mouse, and reads the
+// 'drag-update' performance measures the stress overlay records around each update (derive the
+// frame from the properties, let Vue patch the Konva nodes, draw the layer).
+import { mkdtempSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
+import { chromium } from '@playwright/test'
+import { buildIfStale, freePort, startServer } from './lib.mjs'
+
+const SIZES = (process.env.BENCH_VERTICES || '200,2000,20000').split(',').map(Number)
+const STEPS = Number(process.env.BENCH_STEPS || 240)
+// The page that hosts the stress overlay (`ID` is replaced by the sketch id): by default the editor
+// page when the stress panels are wired into it, else the stress development page.
+const PAGE = process.env.BENCH_PAGE || null
+const EMAIL = 'engineer@millrace.test'
+const PASSWORD = 'millrace-demo-2026'
+
+/** A regular N-gon of circumradius R (mm), counter-clockwise, with a shallow notch so it is not symmetric. */
+function section(n, R = 300) {
+  const ring = []
+  for (let i = 0; i < n; i++) {
+    const t = (2 * Math.PI * i) / n
+    const r = R * (1 - 0.15 * Math.max(0, Math.cos(t - 0.6)) ** 8)
+    ring.push([r * Math.cos(t), r * Math.sin(t)])
+  }
+  return ring
+}
+
+/** BENCH_PROFILE=1: the 25 functions with the most self time during the drag (for finding hot spots). */
+function printProfile(profile) {
+  const self = new Map()
+  const dt = new Map()
+  for (let i = 0; i < profile.samples.length; i++) dt.set(profile.samples[i], (dt.get(profile.samples[i]) ?? 0) + (profile.timeDeltas[i] ?? 0))
+  for (const node of profile.nodes) {
+    const f = node.callFrame
+    const key = `${f.functionName || '(anon)'} ${f.url.split('/').pop()}:${f.lineNumber}`
+    self.set(key, (self.get(key) ?? 0) + (dt.get(node.id) ?? 0) / 1000)
+  }
+  for (const [k, v] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${v.toFixed(1).padStart(8)} ms  ${k}`)
+}
+
+function quantile(sorted, q) {
+  if (sorted.length === 0) return NaN
+  const pos = (sorted.length - 1) * q
+  const lo = Math.floor(pos)
+  const hi = Math.ceil(pos)
+  return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo)
+}
+
+async function main() {
+  buildIfStale()
+  const port = await freePort()
+  const dir = mkdtempSync(join(tmpdir(), 'kernwise-bench-ui-'))
+  const { child, url } = await startServer({
+    PORT: String(port),
+    NUXT_DB_PATH: join(dir, 'bench.sqlite'),
+    NUXT_SEED_DEMO: 'true',
+    NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef',
+  })
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
+    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+  })
+  try {
+    const context = await browser.newContext({ baseURL: url, viewport: { width: 1440, height: 900 } })
+    const page = await context.newPage()
+    const login = await page.request.post('/api/auth/login', { data: { email: EMAIL, password: PASSWORD } })
+    if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`)
+    for (const n of SIZES) {
+      const document = {
+        schema: 'kernwise.sketch/1',
+        parts: [{ id: 'part-1', name: `Bench ${n}`, holes: [], shape: null, outline: section(n), material: { name: 'Steel', E: 200000, fy: 355 } }],
+        cases: [{ id: 'case-1', name: 'Dead', Mx: 0, My: 0 }],
+        combinations: [],
+        loads: [{ id: 'load-1', name: 'G', caseId: 'case-1', P: 1e6, x: 0, y: 0 }],
+        // BENCH_NO_TENSION=1 drags in the no-tension (partial contact, Newton per frame) view instead.
+        settings: { noTension: !!process.env.BENCH_NO_TENSION },
+      }
+      const res = await page.request.post('/api/sketches', { data: { title: `bench-ui ${n}`, document } })
+      if (res.status() !== 201) throw new Error(`creating the sketch failed: ${res.status()} ${await res.text()}`)
+      const { id } = await res.json()
+      const path = PAGE ? PAGE.replace('ID', id) : `/sketches/${id}`
+      await page.goto(path)
+      await page.waitForSelector('html[data-hydrated="true"]')
+      await page.waitForSelector('[data-testid="sketch-canvas"]')
+      await page.waitForSelector('[data-testid="analysis-state"][data-analysis="ready"], [data-testid="tension-panel"][data-state="inside"]', { state: 'attached', timeout: 60_000 })
+      const canvas = page.getByTestId('sketch-canvas')
+      const box = await canvas.boundingBox()
+      const zoom = Number(await canvas.getAttribute('data-zoom'))
+      const panX = Number(await canvas.getAttribute('data-pan-x'))
+      const panY = Number(await canvas.getAttribute('data-pan-y'))
+      // The load sits on the centroid; find it from the section's properties via the load panel (x, y = 0).
+      const at = (x, y) => [box.x + panX + zoom * x, box.y + panY - zoom * y]
+      await page.evaluate(() => performance.clearMeasures('drag-update'))
+      const [x0, y0] = at(0, 0)
+      await page.mouse.move(x0, y0)
+      await page.mouse.down()
+      const cdp = process.env.BENCH_PROFILE ? await context.newCDPSession(page) : null
+      if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start') }
+      // Out across the core edge and round a loop, back towards the centroid (no snapping on most steps).
+      for (let k = 1; k <= STEPS; k++) {
+        const t = k / STEPS
+        const r = 220 * Math.sin(Math.PI * t)
+        const a = 2.4 * Math.PI * t + 0.3
+        const [sx, sy] = at(r * Math.cos(a) + 7, r * Math.sin(a) + 5)
+        await page.mouse.move(sx, sy)
+      }
+      await page.mouse.up()
+      if (cdp) printProfile((await cdp.send('Profiler.stop')).profile)
+      const durations = await page.evaluate(() => performance.getEntriesByName('drag-update').map(e => e.duration))
+      durations.sort((a, b) => a - b)
+      if (durations.length < STEPS / 2) console.warn(`[bench-ui] only ${durations.length} drag updates were measured for ${n} vertices`)
+      if (n === SIZES[0]) console.log(`[bench-ui] page ${path.replace(id, ':id')}`)
+      console.log(`drag-update p50_ms=${quantile(durations, 0.5).toFixed(2)} p95_ms=${quantile(durations, 0.95).toFixed(2)} vertices=${n}${process.env.BENCH_NO_TENSION ? ' view=no-tension' : ''}`)
+    }
+  } finally {
+    await browser.close()
+    child.kill()
+    rmSync(dir, { recursive: true, force: true })
+  }
+}
+
+main().catch((err) => {
+  console.error(err)
+  process.exit(1)
+})

@@ -1,0 +1,209 @@
+import type { Line, Ring } from '../geometry/types'
+import { envelopeExtremes, type LoadSet } from '../loads/combine'
+import { solveContact } from '../mechanics/contact'
+import { inKern, kernMargin, neutralAxis, planeExtremes, resultantActions, stressPlane, tensionOnset, type InertiaLike, type TensionOnset } from '../mechanics/stress'
+import type { ContactResult, StressPlane, StressPoint } from '../mechanics/types'
+import { lineInRings } from './field'
+
+/** A material region as the view draws it: n = E / E_ref and all its rings flattened (mm). */
+export interface FrameRegion {
+  readonly name: string
+  readonly n: number
+  readonly rings: readonly Ring[]
+}
+
+/** What one evaluation needs: properties (mm, mm², mm⁴), hull and core (mm), regions and the load sets. */
+export interface FrameInput {
+  readonly props: InertiaLike
+  readonly hull: Ring
+  readonly kern: Ring
+  readonly regions: readonly FrameRegion[]
+  /** One set for a case or combination; several for the envelope. */
+  readonly sets: readonly LoadSet[]
+  readonly envelope: boolean
+  readonly noTension: boolean
+}
+
+/** The resultant of the shown set: P (N, compression +), N (tension +), moments (N·mm), its point (mm) or null. */
+export interface FrameResultant {
+  P: number
+  N: number
+  Mx: number
+  My: number
+  x: number | null
+  y: number | null
+}
+
+/**
+ * The live stress state for one drag frame (MPa tension positive, mm section coordinates). `planes`
+ * are the equivalent planes (a region's stress is n × plane). `kind` says how to draw it: one exact
+ * plane, an envelope (sampled), or a no-tension contact plane (exact, clamped at 0).
+ */
+export interface StressFrame {
+  kind: 'none' | 'plane' | 'envelope' | 'contact'
+  planes: StressPlane[]
+  resultant: FrameResultant | null
+  /** Most compressive and most tensile point over all regions (n applied). */
+  min: StressPoint | null
+  max: StressPoint | null
+  neutral: Line | null
+  neutralInSection: boolean
+  inKern: boolean | null
+  /** Signed distance (mm) of the resultant to the core's edge: + inside, − outside. */
+  margin: number | null
+  /** Where tension first appears moving the resultant away from the centroid. */
+  onset: TensionOnset | null
+  contact: ContactResult | null
+  /** Colour scale half-range (MPa). */
+  limit: number
+}
+
+const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1 }
+const scratchSeg: number[] = []
+const scratchT: number[] = []
+
+/**
+ * Evaluates the stress view for the given load sets from the section properties alone: no server
+ * round trip (the formulas are those of shared/mechanics/stress, contact and kern). `dir` is the
+ * direction (dx, dy) used for "where tension first appears" when the resultant sits on the centroid.
+ */
+export function evaluateFrame(input: FrameInput, dir: readonly [number, number] = [1, 0]): StressFrame {
+  const { props, hull, regions, sets } = input
+  if (sets.length === 0 || regions.length === 0) return EMPTY
+  const planes: StressPlane[] = []
+  let first: ReturnType<typeof resultantActions> | null = null
+  for (const set of sets) {
+    const act = resultantActions(props, set.loads, set.moments)
+    first ??= act
+    const plane = stressPlane(props, act.N, act.Mx, act.My)
+    if (plane) planes.push(plane)
+  }
+  if (planes.length === 0 || first === null) return EMPTY
+  const xc = props.centroid.x
+  const yc = props.centroid.y
+  const single = !input.envelope
+  const resultant: FrameResultant | null = single
+    ? { P: first.P, N: first.N, Mx: first.Mx, My: first.My, x: first.ex === null ? null : xc + first.ex, y: first.ey === null ? null : yc + first.ey }
+    : null
+
+  if (single && input.noTension) {
+    const P = first.P
+    const loads = resultant!.x !== null ? [{ P, x: resultant!.x, y: resultant!.y! }] : []
+    const contact = solveContact(props, regions.map(r => ({ n: r.n, polygons: r.rings.map(ring => [ring]) })), hull, loads)
+    const q = contact.plane
+    const peak = contact.peak
+    return {
+      ...EMPTY,
+      kind: 'contact',
+      planes: q ? [{ a: -q.a, b: -q.b, c: -q.c }] : [],
+      resultant,
+      min: peak ? { value: -peak.value, x: peak.x, y: peak.y } : null,
+      max: null,
+      neutral: contact.liftOff,
+      neutralInSection: contact.liftOff !== null,
+      ...kernState(input, first, dir),
+      contact,
+      limit: peak ? Math.max(peak.value, 1e-9) : 1,
+    }
+  }
+
+  let min: StressPoint | null = null
+  let max: StressPoint | null = null
+  for (const region of regions) {
+    const pts = regions.length === 1 ? hull : region.rings.flat()
+    const ext = envelopeExtremes(planes, pts, region.n)
+    if (!ext) continue
+    if (min === null || ext.min.value < min.value) min = { value: ext.min.value, x: ext.min.x, y: ext.min.y }
+    if (max === null || ext.max.value > max.value) max = { value: ext.max.value, x: ext.max.x, y: ext.max.y }
+  }
+  const limit = Math.max(Math.abs(min?.value ?? 0), Math.abs(max?.value ?? 0), 1e-9)
+  if (!single) return { ...EMPTY, kind: 'envelope', planes, min, max, limit }
+
+  const plane = planes[0]!
+  const neutral = neutralAxis(plane, extentOf(hull))
+  let inside = false
+  if (neutral) {
+    for (const region of regions) {
+      if (lineInRings(region.rings, neutral.a, neutral.b, neutral.c, scratchSeg, scratchT).length > 0) {
+        inside = true
+        break
+      }
+    }
+  }
+  return { ...EMPTY, kind: 'plane', planes, resultant, min, max, neutral, neutralInSection: inside, ...kernState(input, first, dir), limit }
+}
+
+function kernState(input: FrameInput, act: ReturnType<typeof resultantActions>, dir: readonly [number, number]): Pick<StressFrame, 'inKern' | 'margin' | 'onset'> {
+  if (act.ex === null || act.ey === null || !(act.P > 0)) return { inKern: null, margin: null, onset: null }
+  const { props, hull, kern } = input
+  const r = Math.hypot(act.ex, act.ey)
+  const dx = r > 1e-9 ? act.ex / r : dir[0]
+  const dy = r > 1e-9 ? act.ey / r : dir[1]
+  return {
+    inKern: inKern(props, hull, act.ex, act.ey),
+    margin: kernMargin(kern, props.centroid.x + act.ex, props.centroid.y + act.ey),
+    onset: tensionOnset(props, hull, act.ex, act.ey, dx, dy),
+  }
+}
+
+function extentOf(hull: Ring): number {
+  let minX = Infinity
+  let minY = Infinity
+  let maxX = -Infinity
+  let maxY = -Infinity
+  for (const p of hull) {
+    if (p[0] < minX) minX = p[0]
+    if (p[0] > maxX) maxX = p[0]
+    if (p[1] < minY) minY = p[1]
+    if (p[1] > maxY) maxY = p[1]
+  }
+  const d = Math.hypot(maxX - minX, maxY - minY)
+  return d > 0 ? d : 1
+}
+
+/** Snap targets for a dragged load (mm): the centroid, the core's vertices and the principal axes (theta in degrees). */
+export interface LoadSnapTargets {
+  readonly centroid: readonly [number, number]
+  readonly kern: Ring
+  readonly theta: number
+}
+
+/** What a dragged load snapped to, for the cue. */
+export type LoadSnap = 'centroid' | 'core vertex' | 'principal axis 1' | 'principal axis 2' | null
+
+/**
+ * Snaps a load position (mm) within `tol` mm: the centroid first, then a core vertex, then the
+ * nearest point on a principal axis. Writes the point into `out` and returns what it snapped to.
+ */
+export function snapLoadPoint(x: number, y: number, t: LoadSnapTargets, tol: number, out: [number, number]): LoadSnap {
+  const [xc, yc] = t.centroid
+  out[0] = x
+  out[1] = y
+  if (Math.hypot(x - xc, y - yc) <= tol) {
+    out[0] = xc
+    out[1] = yc
+    return 'centroid'
+  }
+  for (const k of t.kern) {
+    if (Math.hypot(x - k[0], y - k[1]) <= tol) {
+      out[0] = k[0]
+      out[1] = k[1]
+      return 'core vertex'
+    }
+  }
+  const th = (t.theta * Math.PI) / 180
+  const axes: [number, number, LoadSnap][] = [[Math.cos(th), Math.sin(th), 'principal axis 1'], [-Math.sin(th), Math.cos(th), 'principal axis 2']]
+  let best: LoadSnap = null
+  let bestD = tol
+  for (const [ux, uy, name] of axes) {
+    const along = (x - xc) * ux + (y - yc) * uy
+    const d = Math.abs((x - xc) * uy - (y - yc) * ux)
+    if (d <= bestD) {
+      bestD = d
+      best = name
+      out[0] = xc + along * ux
+      out[1] = yc + along * uy
+    }
+  }
+  return best
+}
