@@ -12,6 +12,8 @@ export const MAX_ZOOM = 1e4
  */
 export const useViewportStore = defineStore('viewport', () => {
   const zoom = ref(1)
+  /** Screen px along the right edge that a floating panel covers; fit() centres in the rest. */
+  const reserveRight = ref(0)
   const panX = ref(0)
   const panY = ref(0)
   const width = ref(800)
@@ -46,9 +48,11 @@ export const useViewportStore = defineStore('viewport', () => {
     const box = b ?? { minX: -250, minY: -250, maxX: 250, maxY: 250 }
     const w = Math.max(box.maxX - box.minX, 1e-6)
     const h = Math.max(box.maxY - box.minY, 1e-6)
-    const z = Math.min((width.value - 2 * margin) / w, (height.value - 2 * margin) / h)
+    // Keep the drawing clear of what floats over the canvas's right edge (the stress legend).
+    const free = width.value - reserveRight.value
+    const z = Math.min((free - 2 * margin) / w, (height.value - 2 * margin) / h)
     zoom.value = Math.min(MAX_ZOOM, Math.max(MIN_ZOOM, z > 0 ? z : 1))
-    panX.value = width.value / 2 - zoom.value * (box.minX + box.maxX) / 2
+    panX.value = free / 2 - zoom.value * (box.minX + box.maxX) / 2
     panY.value = height.value / 2 + zoom.value * (box.minY + box.maxY) / 2
   }
 
@@ -65,5 +69,5 @@ export const useViewportStore = defineStore('viewport', () => {
     return { minX: x0, minY: y0, maxX: x1, maxY: y1 }
   })
 
-  return { zoom, panX, panY, width, height, visible, toScreen, toWorld, zoomAt, panBy, fit, setSize }
+  return { zoom, panX, panY, width, height, reserveRight, visible, toScreen, toWorld, zoomAt, panBy, fit, setSize }
 })

@@ -52,13 +52,18 @@ function craneColumn(): SketchDocument {
   const params = { h: 300, b: 300, tw: 11, tf: 19, r: 27 }
   const column = part('c3-column', 'H 300 × 300', SHAPES.ishape.build(params), steel, { kind: 'ishape', params })
   const plate = part('c3-plate', 'Bracket plate 240 × 15', rect(-120, 150, 120, 165), steel, { kind: 'plate', params: { b: 240, h: 15 } })
-  return doc([column, plate], [{ name: 'Crane bracket', caseId: 'case-crane', P: 320 * kN, x: 20, y: 60 }], {
+  const loads = [
+    { name: 'Crane bracket', caseId: 'case-crane', P: 320 * kN, x: 20, y: 60 },
+    { name: 'Column above', caseId: 'case-1', P: 200 * kN, x: 0, y: 0 },
+  ]
+  // Opens on the crane case: the 320 kN of the scenario, inside the core.
+  return doc([column, plate], loads, {
     cases: [
       { id: 'case-1', name: 'Dead (example)', Mx: 0, My: 0 },
       { id: 'case-crane', name: 'Crane (example)', Mx: 0, My: 0 },
     ],
     combinations: [{ id: 'combo-1', name: 'Example 1.35 D + 1.5 C (factors typed for the demo)', factors: { 'case-1': 1.35, 'case-crane': 1.5 } }],
-  })
+  }, { show: { type: 'case', id: 'case-crane' } })
 }
 
 /** 2. Two channels toe to toe closed by plates into a box, taken at a bolt line: 22 mm holes cut through each plate. */
