@@ -24,11 +24,12 @@ export function useAnalysis() {
 }
 
 /**
- * Posts the sketch to /api/analysis whenever the document changes: lightly debounced, at most
- * one request in flight, and the latest geometry wins (a change made while a request runs is
- * sent as soon as it returns; intermediate states are skipped).
+ * Posts the sketch to /api/analysis whenever the document changes, at most one request in
+ * flight, and the latest geometry wins (a change made while a request runs is sent as soon as it
+ * returns; intermediate states are skipped). With no debounce (the default) the request starts
+ * synchronously with the change, so the network round trip overlaps the re-render it causes.
  */
-export function useLiveAnalysis(debounceMs = 40) {
+export function useLiveAnalysis(debounceMs = 0) {
   const state = useAnalysis()
   const sketch = useSketchStore()
   let inFlight = false
@@ -61,13 +62,20 @@ export function useLiveAnalysis(debounceMs = 40) {
     }
   }
 
+  function dispatch(): void {
+    const job = { doc: sketch.doc, revision: sketch.revision }
+    if (inFlight) queued = job
+    else void send(job.doc, job.revision)
+  }
+
   function schedule(): void {
     if (timer) clearTimeout(timer)
+    // A microtask: the store action that changed the document has finished (its revision is
+    // counted) but the re-render it causes has not run yet.
+    if (debounceMs <= 0) return queueMicrotask(dispatch)
     timer = setTimeout(() => {
       timer = null
-      const job = { doc: sketch.doc, revision: sketch.revision }
-      if (inFlight) queued = job
-      else void send(job.doc, job.revision)
+      dispatch()
     }, debounceMs)
   }
 
@@ -75,7 +83,7 @@ export function useLiveAnalysis(debounceMs = 40) {
   const stopId = watch(() => sketch.meta?.id, () => {
     state.value = { result: null, pending: false, error: null, errorAt: null, revision: -1, ms: 0 }
   })
-  const stop = watch(() => sketch.doc, schedule, { immediate: true })
+  const stop = watch(() => sketch.doc, schedule, { immediate: true, flush: 'sync' })
   onScopeDispose(() => {
     stop()
     stopId()

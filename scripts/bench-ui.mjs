@@ -50,6 +50,57 @@ function quantile(sorted, q) {
   return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo)
 }
 
+/**
+ * The sketcher on the same section: pointer move → next painted frame while a vertex is dragged,
+ * and pointer up → the properties panel showing the new area (debounce + /api/analysis + render).
+ */
+async function benchVertexDrag(page, at, n) {
+  await page.evaluate(() => {
+    const w = window
+    w.kwFrames = []
+    w.kwFollow = []
+    const canvas = document.querySelector('[data-testid="sketch-canvas"]')
+    canvas.addEventListener('pointermove', () => {
+      if (!w.kwDragging) return
+      const t = performance.now()
+      requestAnimationFrame(() => w.kwFrames.push(performance.now() - t))
+    })
+    canvas.addEventListener('pointerdown', () => { w.kwDragging = true })
+    window.addEventListener('pointerup', () => { w.kwDragging = false; w.kwUp = performance.now() }, true)
+    const area = document.querySelector('[data-testid="prop-area"]')
+    w.kwSplit = []
+    new MutationObserver(() => {
+      if (!w.kwUp) return
+      const now = performance.now()
+      w.kwFollow.push(now - w.kwUp)
+      const req = performance.getEntriesByType('resource').filter(e => e.name.includes('/api/analysis') && e.startTime >= w.kwUp).pop()
+      if (req) w.kwSplit.push([req.startTime - w.kwUp, req.responseEnd - req.startTime, now - req.responseEnd])
+      w.kwUp = 0
+    })
+      .observe(area, { attributes: true, attributeFilter: ['data-value'] })
+  })
+  const [px, py] = at(-120, -80)
+  await page.mouse.click(px, py) // pick the part (away from the load on the centroid)
+  const REPS = 20
+  for (let rep = 0; rep < REPS; rep++) {
+    // Where vertex 0 is now (snapping moves it off the pointer's path), from the vertex table (mm).
+    const v = [Number(await page.getByTestId('vertex-0-x').inputValue()), Number(await page.getByTestId('vertex-0-y').inputValue())]
+    const [sx, sy] = at(v[0], v[1])
+    await page.mouse.move(sx, sy)
+    await page.mouse.down()
+    for (let k = 1; k <= 10; k++) await page.mouse.move(sx + k * 1.5, sy + (rep % 2 ? k : -k))
+    await page.mouse.up()
+    await page.waitForFunction(count => window.kwFollow.length >= count, rep + 1, { timeout: 15_000 }).catch(() => {})
+  }
+  const frames = (await page.evaluate(() => window.kwFrames)).sort((a, b) => a - b)
+  const follow = (await page.evaluate(() => window.kwFollow)).sort((a, b) => a - b)
+  console.log(`vertex-drag-frame p50_ms=${quantile(frames, 0.5).toFixed(2)} p95_ms=${quantile(frames, 0.95).toFixed(2)} vertices=${n} (pointer move to the next painted frame)`)
+  const split = await page.evaluate(() => window.kwSplit)
+  const med = i => quantile(split.map(r => r[i]).sort((a, b) => a - b), 0.5).toFixed(1)
+  if (split.length) console.log(`properties-follow-split before_request_ms=${med(0)} request_ms=${med(1)} after_response_ms=${med(2)} vertices=${n} (medians)`)
+  console.log(`properties-follow p50_ms=${quantile(follow, 0.5).toFixed(1)} p95_ms=${quantile(follow, 0.95).toFixed(1)} vertices=${n} edits=${follow.length}/${REPS} (pointer up to the new area in the panel)`)
+}
+
 async function main() {
   buildIfStale()
   const port = await freePort()
@@ -115,6 +166,7 @@ async function main() {
       if (durations.length < STEPS / 2) console.warn(`[bench-ui] only ${durations.length} drag updates were measured for ${n} vertices`)
       if (n === SIZES[0]) console.log(`[bench-ui] page ${path.replace(id, ':id')}`)
       console.log(`drag-update p50_ms=${quantile(durations, 0.5).toFixed(2)} p95_ms=${quantile(durations, 0.95).toFixed(2)} vertices=${n}${process.env.BENCH_NO_TENSION ? ' view=no-tension' : ''}`)
+      await benchVertexDrag(page, at, n)
     }
   } finally {
     await browser.close()

@@ -1,7 +1,8 @@
 // npm test: every test. Makes sure Debian's chromium is there, builds the server once, then runs
 // vitest (unit + API against the built server) and Playwright (browser tests in chromium).
 import { spawnSync } from 'node:child_process'
-import { existsSync } from 'node:fs'
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { buildIfStale, root } from './lib.mjs'
 
@@ -34,13 +35,39 @@ function run(label, args) {
 const chromium = ensureChromium()
 buildIfStale()
 const bin = p => join(root, 'node_modules', p)
+const reports = mkdtempSync(join(tmpdir(), 'kernwise-test-'))
+const vitestJson = join(reports, 'vitest.json')
+const playwrightJson = join(reports, 'playwright.json')
+process.env.PLAYWRIGHT_JSON_OUTPUT_NAME = playwrightJson
 const results = {
-  vitest: run('vitest: unit and API tests', [bin('vitest/vitest.mjs'), 'run']),
-  playwright: run('playwright: browser tests', [bin('@playwright/test/cli.js'), 'test']),
+  vitest: run('vitest: unit and API tests', [bin('vitest/vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${vitestJson}`]),
+  playwright: run('playwright: browser tests', [bin('@playwright/test/cli.js'), 'test', '--reporter=list,json']),
 }
+
+/** Totals from the two runners' JSON reports, for one closing line. */
+function totals() {
+  const t = { passed: 0, failed: 0, skipped: 0 }
+  try {
+    const v = JSON.parse(readFileSync(vitestJson, 'utf8'))
+    t.passed += v.numPassedTests
+    t.failed += v.numFailedTests
+    t.skipped += (v.numPendingTests ?? 0) + (v.numTodoTests ?? 0)
+  } catch { t.failed += results.vitest ? 0 : 1 }
+  try {
+    const s = JSON.parse(readFileSync(playwrightJson, 'utf8')).stats
+    t.passed += s.expected
+    t.failed += s.unexpected + (s.flaky ?? 0)
+    t.skipped += s.skipped
+  } catch { t.failed += results.playwright ? 0 : 1 }
+  return t
+}
+
+const t = totals()
+rmSync(reports, { recursive: true, force: true })
 const failed = Object.entries(results).filter(([, ok]) => !ok).map(([k]) => k)
+console.log(`\n${t.passed} passed, ${t.failed} failed, ${t.skipped} skipped`)
 if (failed.length) {
-  console.error(`\n[kernwise] FAILED: ${failed.join(', ')}`)
+  console.error(`[kernwise] FAILED: ${failed.join(', ')}`)
   process.exit(1)
 }
-console.log('\n[kernwise] all test suites passed')
+console.log('[kernwise] all test suites passed')
