@@ -1,7 +1,10 @@
-import type { Bounds, Ring } from '#shared/geometry/types'
+import { ringsBounds } from '#shared/geometry/bounds'
+import type { Bounds } from '#shared/geometry/types'
 import { envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient } from '#shared/stress/field'
 import { formatNumber, formatStress, STRESS_COLOURS } from '#shared/stress/scale'
 import { emptyScene, type StressScene } from './useStressPaint'
+
+const EMPTY_BOX: Bounds = { minX: 0, minY: 0, maxX: 0, maxY: 0 }
 
 /**
  * The stress overlay's scene for the current frame (mm): exact gradients or envelope bands, isolines,
@@ -49,7 +52,7 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
       const thresholds = [lo, ...isolineValues(lo, hi, 8, u.stress.perMPa), 0].filter((v, i, a) => a.indexOf(v) === i && v >= lo && v <= hi).sort((p, q) => p - q)
       const worstC = view.envelopeSide.value === 'compression'
       for (const r of regions) {
-        const env = envelopeBands(boundsOf(r.rings), r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y])
+        const env = envelopeBands(ringsBounds(r.rings) ?? EMPTY_BOX, r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y])
         s.envelope.push({ rings: r.rings, base: env.base, bands: env.bands })
         for (const l of env.labels) s.labels.push({ x: l.x, y: l.y, text: formatStress(l.value, u), dx: 3, dy: -3, size: 10 })
       }
@@ -132,20 +135,4 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
     void zoom()
     return s
   })
-}
-
-function boundsOf(rings: readonly Ring[]): Bounds {
-  let minX = Infinity
-  let minY = Infinity
-  let maxX = -Infinity
-  let maxY = -Infinity
-  for (const ring of rings) {
-    for (const p of ring) {
-      if (p[0] < minX) minX = p[0]
-      if (p[0] > maxX) maxX = p[0]
-      if (p[1] < minY) minY = p[1]
-      if (p[1] > maxY) maxY = p[1]
-    }
-  }
-  return { minX, minY, maxX, maxY }
 }

@@ -33,22 +33,8 @@ export function mirrorRing(ring: Ring, axis: 'x' | 'y', centre: Point): XY[] {
   return out.reverse()
 }
 
-/** Bounds (mm) of some rings, or null when they hold no vertex. */
-export function ringsBounds(rings: readonly Ring[]): Bounds | null {
-  let minX = Infinity
-  let minY = Infinity
-  let maxX = -Infinity
-  let maxY = -Infinity
-  for (const r of rings) {
-    for (const [x, y] of r) {
-      if (x < minX) minX = x
-      if (x > maxX) maxX = x
-      if (y < minY) minY = y
-      if (y > maxY) maxY = y
-    }
-  }
-  return minX <= maxX ? { minX, minY, maxX, maxY } : null
-}
+
+export { ringsBounds } from '../geometry/bounds'
 
 /** Centre (mm) of a bounds box. */
 export function boundsCentre(b: Bounds): XY {

@@ -1,3 +1,4 @@
+import { ringsBounds } from '../geometry/bounds'
 import polygonClipping from 'polygon-clipping'
 import type { MultiPolygon as ClipMultiPolygon, Polygon as ClipPolygon } from 'polygon-clipping'
 import { ringsHull } from '../geometry/hull'
@@ -65,7 +66,8 @@ export function prepareSection(parts: readonly PartInput[], options: PrepareOpti
     if (polygons.length > 0) regions.push({ material, n: material.E / referenceE, polygons })
   }
   const outlines = regions.flatMap((region) => region.polygons.map((polygon) => polygon[0]!))
-  const bounds = ringsBounds(outlines)
+  // Normalised rings hold at least 3 vertices, so the bounds exist.
+  const bounds = ringsBounds(outlines)!
   const preparedParts: PreparedPart[] = clean.map((part, j) => ({
     index: j,
     name: parts[j]!.name ?? `Part ${j + 1}`,
@@ -166,8 +168,8 @@ function netPolygons(part: CleanPart, j: number, all: readonly CleanPart[], warn
   all.forEach((other, i) => {
     if (i === j) return
     other.holes.forEach((hole, k) => {
-      box ??= ringsBounds([part.outline])
-      if (!boxesOverlap(ringsBounds([hole]), box)) return
+      box ??= ringsBounds([part.outline])!
+      if (!boxesOverlap(ringsBounds([hole])!, box)) return
       const holeArea = -ringArea(hole)
       let cut: number
       if (findRingsIntersection([part.outline, hole]) !== null) cut = overlapArea([[part.outline]], [[hole]])
@@ -189,7 +191,7 @@ function checkMaterialOverlaps(clean: readonly CleanPart[], nets: readonly Polyg
     for (let j = i + 1; j < clean.length; j++) {
       if (materialKey(clean[i]!.material) === materialKey(clean[j]!.material)) continue
       if (nets[i]!.length === 0 || nets[j]!.length === 0) continue
-      if (!boxesOverlap(ringsBounds([clean[i]!.outline]), ringsBounds([clean[j]!.outline]))) continue
+      if (!boxesOverlap(ringsBounds([clean[i]!.outline])!, ringsBounds([clean[j]!.outline])!)) continue
       const a = clean[i]!.outline
       const b = clean[j]!.outline
       if (findRingsIntersection([a, b]) === null && !pointInRing(a[0]!, b) && !pointInRing(b[0]!, a)) continue
@@ -255,21 +257,6 @@ function materialKey(material: Material): string {
   return `${material.E}|${material.fy ?? ''}|${material.density ?? ''}`
 }
 
-function ringsBounds(rings: readonly Ring[]): Bounds {
-  let minX = Infinity
-  let minY = Infinity
-  let maxX = -Infinity
-  let maxY = -Infinity
-  for (const ring of rings) {
-    for (const p of ring) {
-      if (p[0] < minX) minX = p[0]
-      if (p[0] > maxX) maxX = p[0]
-      if (p[1] < minY) minY = p[1]
-      if (p[1] > maxY) maxY = p[1]
-    }
-  }
-  return { minX, minY, maxX, maxY }
-}
 
 function boxesOverlap(a: Bounds, b: Bounds): boolean {
   return a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY

@@ -1,3 +1,4 @@
+import { ringExtent } from '../geometry/bounds'
 import type { Line, Polygon, Ring } from '../geometry/types'
 import { SectionError } from './types'
 import type { AppliedMoments, PointLoad, SectionProperties, StressPlane, StressPoint, StressResult } from './types'
@@ -274,23 +275,7 @@ export function sectionStress(
     }
   }
   if (max === null || min === null) throw new SectionError('The section has no vertices to evaluate the stress at.')
-  const extent = hullExtent(hull)
+  const extent = ringExtent(hull)
   const kern = actions.P > 0 && actions.ex !== null && actions.ey !== null && inKern(props, hull, actions.ex, actions.ey)
   return { N: actions.N, Mx: actions.Mx, My: actions.My, plane, max, min, neutralAxis: neutralAxis(plane, extent), inKern: kern, vertices }
-}
-
-/** Diagonal of the hull's bounding box (mm), at least 1. */
-function hullExtent(hull: Ring): number {
-  let minX = Infinity
-  let minY = Infinity
-  let maxX = -Infinity
-  let maxY = -Infinity
-  for (const p of hull) {
-    if (p[0] < minX) minX = p[0]
-    if (p[0] > maxX) maxX = p[0]
-    if (p[1] < minY) minY = p[1]
-    if (p[1] > maxY) maxY = p[1]
-  }
-  const d = Math.hypot(maxX - minX, maxY - minY)
-  return Number.isFinite(d) && d > 0 ? d : 1
 }

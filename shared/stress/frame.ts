@@ -1,3 +1,4 @@
+import { ringExtent } from '../geometry/bounds'
 import type { Line, Ring } from '../geometry/types'
 import { envelopeExtremes, type LoadSet } from '../loads/combine'
 import { solveContact } from '../mechanics/contact'
@@ -120,7 +121,7 @@ export function evaluateFrame(input: FrameInput, dir: readonly [number, number] 
   if (!single) return { ...EMPTY, kind: 'envelope', planes, min, max, limit }
 
   const plane = planes[0]!
-  const neutral = neutralAxis(plane, extentOf(hull))
+  const neutral = neutralAxis(plane, ringExtent(hull))
   let inside = false
   if (neutral) {
     for (const region of regions) {
@@ -146,20 +147,6 @@ function kernState(input: FrameInput, act: ReturnType<typeof resultantActions>, 
   }
 }
 
-function extentOf(hull: Ring): number {
-  let minX = Infinity
-  let minY = Infinity
-  let maxX = -Infinity
-  let maxY = -Infinity
-  for (const p of hull) {
-    if (p[0] < minX) minX = p[0]
-    if (p[0] > maxX) maxX = p[0]
-    if (p[1] < minY) minY = p[1]
-    if (p[1] > maxY) maxY = p[1]
-  }
-  const d = Math.hypot(maxX - minX, maxY - minY)
-  return d > 0 ? d : 1
-}
 
 /** Snap targets for a dragged load (mm): the centroid, the core's vertices and the principal axes (theta in degrees). */
 export interface LoadSnapTargets {
