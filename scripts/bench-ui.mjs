@@ -86,11 +86,12 @@ async function benchVertexDrag(page, at, n) {
     // Where vertex 0 is now (snapping moves it off the pointer's path), from the vertex table (mm).
     const v = [Number(await page.getByTestId('vertex-0-x').inputValue()), Number(await page.getByTestId('vertex-0-y').inputValue())]
     const [sx, sy] = at(v[0], v[1])
+    const seen = await page.evaluate(() => window.kwFollow.length)
     await page.mouse.move(sx, sy)
     await page.mouse.down()
     for (let k = 1; k <= 10; k++) await page.mouse.move(sx + k * 1.5, sy + (rep % 2 ? k : -k))
     await page.mouse.up()
-    await page.waitForFunction(count => window.kwFollow.length >= count, rep + 1, { timeout: 3_000 }).catch(() => {}) // a drag that missed the vertex changes nothing: move on
+    await page.waitForFunction(count => window.kwFollow.length > count, seen, { timeout: 3_000 }).catch(() => {}) // a drag that missed the vertex changes nothing: move on
   }
   const frames = (await page.evaluate(() => window.kwFrames)).sort((a, b) => a - b)
   const follow = (await page.evaluate(() => window.kwFollow)).sort((a, b) => a - b)
