@@ -1,7 +1,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref, shallowRef } from 'vue'
 import { emptyDocument, type LoadCase, type LoadCombination, type SketchDocument, type SketchHole, type SketchLoad, type SketchMaterial, type SketchPart, type SketchSettings } from '#shared/sketch/document'
-import type { SketchFull } from '#shared/sketch/api'
+import type { SketchFull, SketchSummary } from '#shared/sketch/api'
 import type { Point } from '#shared/geometry/types'
 import { MATERIAL_PRESETS } from '#shared/mechanics/materials'
 import { newId } from '#shared/editor/ids'
@@ -19,14 +19,7 @@ export interface NewPart {
 }
 
 /** The sketch's identity and save state beside the document. */
-export interface SketchMeta {
-  id: string
-  title: string
-  project: string
-  description: string
-  status: string
-  version: number
-}
+export type SketchMeta = Pick<SketchSummary, 'id' | 'title' | 'project' | 'description' | 'status' | 'version'>
 
 const steel = (): SketchMaterial => {
   const m = MATERIAL_PRESETS.steel
