@@ -6,6 +6,7 @@ import type { SketchDocument } from '#shared/sketch/document'
 import { checkUtilisation } from '#shared/stress/check'
 import { evaluateFrame, type FrameRegion } from '#shared/stress/frame'
 import { displayUnits, stressScale } from '#shared/stress/scale'
+import { regionsHull } from '#shared/geometry/hull'
 import type { Ring } from '#shared/geometry/types'
 
 /** A material region of the view: FrameRegion plus the limits of its check (MPa). */
@@ -42,24 +43,35 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   let lastDir: [number, number] = [1, 0]
   const scratch = new Map<string, PointLoad[]>()
 
+  // The document's pieces the view reads, each its own computed: the store replaces only what an
+  // edit changes, so moving a vertex does not re-derive the loads, and the section (which only
+  // needs each material's allowable stress from the parts) waits for the new analysis.
+  const settings = computed(() => doc.value.settings)
+  const docLoads = computed(() => doc.value.loads)
+  const cases = computed(() => doc.value.cases)
+  const combinations = computed(() => doc.value.combinations)
+  /** Name, E and allowable stress of each part's material, as a string so that equal lists compare equal. */
+  const allowables = computed(() => JSON.stringify(doc.value.parts.map(p => [p.material.name ?? null, p.material.E, p.material.allowable ?? null])))
+  const anyNoTension = computed(() => doc.value.parts.some(p => p.material.noTension === true))
+
   const section = computed(() => {
     // Plain data, not reactive proxies: the hot loops below read every vertex on every frame.
     const a = analysis.value ? toRaw(analysis.value) : null
     if (!a) return null
-    const parts = doc.value.parts
+    const materials = JSON.parse(allowables.value) as [string | null, number, number | null][]
     const regions: ViewRegion[] = a.regions.map((r) => {
-      const part = parts.find(p => p.material.name === r.name && p.material.E === r.E)
+      const allowable = materials.find(m => m[0] === r.name && m[1] === r.E)?.[2] ?? null
       // markRaw: vue-konva deep-watches and stores its configs reactively; big vertex arrays must stay plain.
       const rings: Ring[] = markRaw(r.polygons.flat().map(ring => markRaw(ring as Ring[number][]) as Ring))
-      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, allowable: part?.material.allowable ?? null }
+      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, allowable }
     })
-    return { props: a.properties, hull: markRaw(a.hull as Ring[number][]) as Ring, kern: markRaw(a.kern as Ring[number][]) as Ring, regions, shear: a.shear, warnings: a.warnings }
+    return { props: a.properties, hull: markRaw(regionsHull(a.regions)) as Ring, kern: markRaw(a.kern as Ring[number][]) as Ring, regions, shear: a.shear, warnings: a.warnings }
   })
 
-  const show = computed(() => doc.value.settings.show)
-  const units = computed(() => displayUnits(doc.value.settings.units))
-  const noTension = computed(() => doc.value.settings.noTension || doc.value.parts.some(p => p.material.noTension === true))
-  const baseSets = computed(() => loadSetsFor(show.value, doc.value.loads, doc.value.cases, doc.value.combinations))
+  const show = computed(() => settings.value.show)
+  const units = computed(() => displayUnits(settings.value.units))
+  const noTension = computed(() => settings.value.noTension || anyNoTension.value)
+  const baseSets = computed(() => loadSetsFor(show.value, docLoads.value, cases.value, combinations.value))
 
   /** The load sets with the drag applied (factored P unchanged). */
   const sets = computed(() => {
@@ -101,7 +113,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   const loads = computed(() => {
     const ids = shownIds.value
     const d = drag.value
-    return doc.value.loads.filter(l => ids.has(l.id)).map(l => (d && d.id === l.id ? { ...l, x: d.x, y: d.y } : l))
+    return docLoads.value.filter(l => ids.has(l.id)).map(l => (d && d.id === l.id ? { ...l, x: d.x, y: d.y } : l))
   })
 
   const checks = computed(() => {
@@ -113,7 +125,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
 
   const slender = computed(() => {
     const s = section.value
-    const KL = doc.value.settings.effectiveLength
+    const KL = settings.value.effectiveLength
     if (!s || !KL) return null
     const P = Math.max(0, ...sets.value.map(set => set.loads.reduce((sum, l) => sum + l.P, 0)))
     return slenderness(s.props, s.props.referenceE, KL, P)

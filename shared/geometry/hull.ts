@@ -1,5 +1,5 @@
 import { orient2d } from './orient'
-import type { Point, Ring } from './types'
+import type { Point, Polygon, Ring } from './types'
 
 /**
  * Convex hull of a point set (mm) by Andrew's monotone chain: counter-clockwise (y up), starting
@@ -47,6 +47,17 @@ export function ringsHull(rings: readonly Ring[]): Point[] {
   }
   if (rings.length === 1) return startAtLowest(candidates)
   return convexHull(candidates)
+}
+
+/**
+ * Convex hull of a prepared section's material regions (the outlines of their polygons; holes lie
+ * inside them). The client derives it from an analysis answer's `regions` with the same function
+ * the server uses, so it need not travel with every answer.
+ */
+export function regionsHull(regions: readonly { readonly polygons: readonly Polygon[] }[]): Point[] {
+  const outlines: Ring[] = []
+  for (const region of regions) for (const polygon of region.polygons) if (polygon[0]) outlines.push(polygon[0])
+  return outlines.length ? ringsHull(outlines) : []
 }
 
 /**

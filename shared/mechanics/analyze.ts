@@ -28,10 +28,12 @@ export interface AnalysisRegionOut {
   polygons: Ring[][]
 }
 
-/** The full answer of one analysis: what POST /api/analysis returns. */
+/**
+ * The full answer of one analysis: what POST /api/analysis returns. The convex hull is not part of
+ * it: `regionsHull(regions)` (shared/geometry/hull.ts) gives the same hull the engine used.
+ */
 export interface AnalysisOutput {
   properties: SectionProperties
-  hull: Ring
   kern: Ring
   regions: AnalysisRegionOut[]
   stress: StressResult | null
@@ -55,7 +57,7 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
   const loads = input.loads ?? []
   const moments = input.moments ?? { Mx: 0, My: 0 }
   const warnings = [...prepared.warnings]
-  const regions = prepared.regions.map((r, i) => ({ n: r.n, polygons: r.polygons, part: i }))
+  const regions = prepared.regions.map((r, i) => ({ n: r.n, polygons: r.polygons, region: i }))
 
   const hasActions = loads.some(l => l.P !== 0) || moments.Mx !== 0 || moments.My !== 0
   const stress = hasActions ? sectionStress(properties, hull, regions, loads, moments) : null
@@ -79,14 +81,13 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
 
   return {
     properties,
-    hull,
     kern,
     regions: prepared.regions.map(r => ({
       name: r.material.name ?? 'Material',
       E: r.material.E,
       n: r.n,
       fy: r.material.fy ?? null,
-      polygons: r.polygons.map(poly => poly.map(ring => [...ring])),
+      polygons: r.polygons as Ring[][],
     })),
     stress,
     contact,

@@ -222,17 +222,18 @@ export function kernMargin(kern: Ring, x: number, y: number): number | null {
   return isOutside ? -outside : inside
 }
 
-/** One material region for {@link sectionStress}: n = E / E_ref, its polygons (mm), and the index reported as `part`. */
+/** One material region for {@link sectionStress}: n = E / E_ref, its polygons (mm), and the index reported as `region`. */
 export interface StressRegion {
   readonly n: number
   readonly polygons: readonly Polygon[]
-  readonly part: number
+  readonly region: number
 }
 
 /**
  * Full stress result (MPa, tension-positive; N in N, moments in N·mm about the centroid) for point loads
- * (compression-positive P) and applied moments. Vertex values are n × the equivalent plane; `ring`
- * counts the rings of a region in order (outline, holes, next polygon...). inKern is true when the
+ * (compression-positive P) and applied moments. Vertex values are n × the equivalent plane, one
+ * list per ring in the ring's vertex order (`polygon` and `ring` index the region's polygons, ring 0
+ * the outline, then its holes), so they pair with the region's own coordinates. inKern is true when the
  * total load is compressive and every hull vertex stays in compression. Throws SectionError for degenerate properties.
  */
 export function sectionStress(
@@ -251,17 +252,24 @@ export function sectionStress(
   let min: StressPoint | null = null
   for (const region of regions) {
     nValues.add(region.n)
-    let ringIndex = 0
-    for (const polygon of region.polygons) {
-      for (const ring of polygon) {
+    for (let pi = 0; pi < region.polygons.length; pi++) {
+      const polygon = region.polygons[pi]!
+      for (let ri = 0; ri < polygon.length; ri++) {
+        const ring = polygon[ri]!
+        const values = new Array<number>(ring.length)
+        let hi = 0
+        let lo = 0
         for (let i = 0; i < ring.length; i++) {
           const p = ring[i]!
           const value = region.n * (plane.a + plane.b * p[0] + plane.c * p[1])
-          vertices.push({ part: region.part, ring: ringIndex, index: i, x: p[0], y: p[1], value })
-          if (max === null || value > max.value) max = { value, x: p[0], y: p[1] }
-          if (min === null || value < min.value) min = { value, x: p[0], y: p[1] }
+          values[i] = value
+          if (value > values[hi]!) hi = i
+          if (value < values[lo]!) lo = i
         }
-        ringIndex++
+        vertices.push({ region: region.region, polygon: pi, ring: ri, values })
+        if (ring.length === 0) continue
+        if (max === null || values[hi]! > max.value) max = { value: values[hi]!, x: ring[hi]![0], y: ring[hi]![1] }
+        if (min === null || values[lo]! < min.value) min = { value: values[lo]!, x: ring[lo]![0], y: ring[lo]![1] }
       }
     }
   }

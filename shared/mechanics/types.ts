@@ -107,6 +107,14 @@ export interface StressPoint {
   y: number
 }
 
+/** The stresses (MPa, tension-positive) at the vertices of one ring of a material region. */
+export interface VertexStresses {
+  region: number
+  polygon: number
+  ring: number
+  values: number[]
+}
+
 export interface StressResult {
   /** Axial force, tension-positive (N), and total moments about the centroid (N·mm). */
   N: number
@@ -117,8 +125,12 @@ export interface StressResult {
   min: StressPoint
   neutralAxis: Line | null
   inKern: boolean
-  /** Per material region: the stress is n times the equivalent plane. */
-  vertices: { part: number; ring: number; index: number; x: number; y: number; value: number }[]
+  /**
+   * Stress at every vertex (MPa), one list per ring: `values[i]` belongs to vertex i of ring `ring`
+   * of polygon `polygon` of material region `region` (ring 0 the outline, then its holes). Per
+   * region the stress is n times the equivalent plane.
+   */
+  vertices: VertexStresses[]
 }
 
 export type ContactStatus = 'full' | 'partial' | 'overturning'

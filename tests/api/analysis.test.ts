@@ -59,6 +59,11 @@ describe('POST /api/analysis', () => {
     expectClose(s.min.value, (-P / (b * h)) * (1 + (6 * e) / b), 1e-9)
     expectClose(s.max.value, (-P / (b * h)) * (1 - (6 * e) / b), 1e-9)
     expect(s.inKern).toBe(true) // e = 40 < b/6 = 50
+    // Stress at every vertex, paired with the region's own ring: σ = −P/A (1 + 12 e (x − b/2) / b²) (same closed form).
+    const outline = r.body.regions[0].polygons[0][0] as number[][]
+    expect(s.vertices).toEqual([{ region: 0, polygon: 0, ring: 0, values: expect.any(Array) }])
+    expect(s.vertices[0].values).toHaveLength(outline.length)
+    outline.forEach(([x], i) => expectClose(s.vertices[0].values[i], (-P / (b * h)) * (1 + (12 * e * (x! - b / 2)) / b ** 2), 1e-9))
     const out = await c.post('/api/analysis', { parts: [{ outline: rect(b, h) }], loads: [{ P, x: b / 2 + 60, y: h / 2 }] })
     expect(out.body.stress.inKern).toBe(false)
     expect(out.body.stress.max.value).toBeGreaterThan(0)

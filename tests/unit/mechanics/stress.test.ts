@@ -223,13 +223,16 @@ describe('sectionStress', () => {
 
   it('sectionStress(rectangle, load at the kern vertex b/6) gives 2P/A and zero at the far edge (standard kern result)', () => {
     const P = 8e5
-    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], part: 0 }], [{ P, x: b / 6, y: 0 }])
+    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], region: 0 }], [{ P, x: b / 6, y: 0 }])
     expectClose(r.min.value, (-2 * P) / (b * h)) // closed form: P/A·(1 + 6e/b) with e = b/6
     expect(r.min.x).toBe(b / 2)
     expectClose(r.max.value, 0, 1, 1e-9)
     expect(r.max.x).toBe(-b / 2)
     expect(r.inKern).toBe(true)
-    expect(r.vertices).toHaveLength(4)
+    expect(r.vertices).toHaveLength(1)
+    expect(r.vertices[0]!.values).toHaveLength(4)
+    // Each vertex's value is the plane at that vertex: -P/A (1 + 12 e x / b²), from P/A + P e x / Iyy with Iyy = h b³/12 (closed form).
+    r.vertices[0]!.values.forEach((v, i) => expectClose(v, (-P / (b * h)) * (1 + (12 * (b / 6) * ring[i]![0]) / b ** 2)))
     expect(r.neutralAxis).not.toBeNull()
     expectClose(-r.neutralAxis!.a / r.neutralAxis!.b, -b / 2) // the line x = -b/2
   })
@@ -245,29 +248,29 @@ describe('sectionStress', () => {
     const eq: InertiaLike = { area: Aeq, centroid: { x: 50, y: yc }, Ixx, Iyy, Ixy: 0 }
     const hull = rect(0, 0, 100, 40)
     const P = 6e5
-    const r = sectionStress(eq, hull, [{ n: 1, polygons: [[r1]], part: 0 }, { n: 2, polygons: [[r2]], part: 1 }], [{ P, x: 50, y: yc }])
-    for (const v of r.vertices) expectClose(v.value, (v.part === 0 ? -1 : -2) * (P / Aeq))
+    const r = sectionStress(eq, hull, [{ n: 1, polygons: [[r1]], region: 0 }, { n: 2, polygons: [[r2]], region: 1 }], [{ P, x: 50, y: yc }])
+    for (const v of r.vertices) for (const value of v.values) expectClose(value, (v.region === 0 ? -1 : -2) * (P / Aeq))
     expectClose(r.min.value, (-2 * P) / Aeq)
     expectClose(r.max.value, -P / Aeq)
     expect(r.neutralAxis).toBeNull() // uniform strain
-    expect(r.vertices.filter((v) => v.part === 1)).toHaveLength(4)
+    expect(r.vertices.filter((v) => v.region === 1).flatMap((v) => v.values)).toHaveLength(4)
   })
 
   it('sectionStress(hole rings) numbers the rings of a region in order', () => {
     const hole: Ring = [[-10, -10], [-10, 10], [10, 10], [10, -10]]
-    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring, hole]], part: 3 }], [{ P: 1, x: 0, y: 0 }])
-    expect(r.vertices.map((v) => [v.part, v.ring, v.index])).toContainEqual([3, 1, 2])
+    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring, hole]], region: 3 }], [{ P: 1, x: 0, y: 0 }])
+    expect(r.vertices.map((v) => [v.region, v.polygon, v.ring, v.values.length])).toEqual([[3, 0, 0, 4], [3, 0, 1, 4]])
   })
 
   it('sectionStress(pure moment, P = 0) is not "in the kern" and has a neutral axis through the centroid', () => {
-    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], part: 0 }], [], { Mx: 1e6, My: 0 })
+    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], region: 0 }], [], { Mx: 1e6, My: 0 })
     expect(r.inKern).toBe(false)
     expectClose(r.max.value, (1e6 * (h / 2)) / props.Ixx) // Mx·y/Ixx (closed form, Ixy = 0)
     expectClose(r.neutralAxis!.a, 0, 1, 1e-12)
   })
 
   it('sectionStress(no loads) gives zeros and no neutral axis, never NaN', () => {
-    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], part: 0 }], [])
+    const r = sectionStress(props, ring, [{ n: 1, polygons: [[ring]], region: 0 }], [])
     expect(r.max.value).toBe(0)
     expect(r.min.value).toBe(0)
     expect(r.neutralAxis).toBeNull()

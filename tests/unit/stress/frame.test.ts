@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { regionsHull } from '../../../shared/geometry/hull'
 import { analyseSection } from '../../../shared/mechanics/analyze'
 import { sectionStress } from '../../../shared/mechanics/stress'
 import type { LoadSet } from '../../../shared/loads/combine'
@@ -13,7 +14,7 @@ function inputFor(parts: Parameters<typeof analyseSection>[0]['parts'], sets: Lo
   const a = analyseSection({ parts })
   return {
     props: a.properties,
-    hull: a.hull,
+    hull: regionsHull(a.regions),
     kern: a.kern,
     regions: a.regions.map(r => ({ name: r.name, n: r.n, rings: r.polygons.flat() })),
     sets,
@@ -31,7 +32,7 @@ describe('evaluateFrame (client-side stress from the properties alone)', () => {
     const loads = [{ P: 80_000, x: 30, y: 40 }]
     const input = inputFor([{ outline: angle, material: { E: 200_000 } }], [setOf(loads, 2e6, -1e6)])
     const f = evaluateFrame(input)
-    const ref = sectionStress(input.props, input.hull, input.regions.map((r, i) => ({ n: r.n, polygons: [r.rings], part: i })), loads, { Mx: 2e6, My: -1e6 })
+    const ref = sectionStress(input.props, input.hull, input.regions.map((r, i) => ({ n: r.n, polygons: [r.rings], region: i })), loads, { Mx: 2e6, My: -1e6 })
     expect(f.kind).toBe('plane')
     expectClose(f.planes[0]!.a, ref.plane.a)
     expectClose(f.planes[0]!.b, ref.plane.b)
