@@ -1,4 +1,5 @@
-import type { Sequelize } from 'sequelize'
+import type { Model, ModelStatic, Sequelize } from 'sequelize'
+import { watchAccountTables } from '../database/account-cache'
 import { initApiToken } from './api-token'
 import { initLoginFailure } from './login-failure'
 import { initSketch } from './sketch'
@@ -14,6 +15,7 @@ export function initModels(sequelize: Sequelize) {
   ApiToken.belongsTo(User, { foreignKey: 'userId' })
   User.hasMany(Sketch, { foreignKey: 'ownerId', onDelete: 'CASCADE' })
   Sketch.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' })
+  watchAccountTables([User, ApiToken] as unknown as ModelStatic<Model>[])
   return { sequelize, User, ApiToken, LoginFailure, Sketch }
 }
 

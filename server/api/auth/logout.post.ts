@@ -1,5 +1,5 @@
 /** Ends the session (a no-op when nobody is signed in). */
 export default defineEventHandler(async (event) => {
-  await clearUserSession(event)
+  await signOut(event)
   return { ok: true }
 })
