@@ -21,9 +21,25 @@ export function parseOr400<S extends z.ZodType>(schema: S, value: unknown): z.ou
   return result.data
 }
 
-/** readValidatedBody with Kernwise's error messages; an unreadable body is a 400 too. */
+/**
+ * The request body parsed as JSON ({} when empty); a 400 naming the problem when it is not JSON.
+ * Plain JSON.parse on the raw text: an analysis body can hold 200 000 vertices, and a key named
+ * `__proto__` only becomes an own property that the zod schemas then drop.
+ */
+export async function readJsonBody(event: H3Event): Promise<unknown> {
+  const raw = await readRawBody(event, 'utf8')
+  if (!raw || !raw.trim()) return {}
+  try {
+    return JSON.parse(raw)
+  } catch (error) {
+    const detail = error instanceof SyntaxError ? ` (${error.message})` : ''
+    throw createError({ statusCode: 400, statusMessage: 'Bad Request', message: `The request body is not valid JSON${detail}.` })
+  }
+}
+
+/** The JSON body checked with `schema`, with Kernwise's error messages; an unreadable body is a 400 too. */
 export async function readBodyAs<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.output<S>> {
-  return readValidatedBody(event, body => parseOr400(schema, body ?? {}))
+  return parseOr400(schema, (await readJsonBody(event)) ?? {})
 }
 
 /** getValidatedRouterParams with Kernwise's error messages. */
