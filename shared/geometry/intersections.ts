@@ -39,6 +39,7 @@ export function findSelfIntersection(ring: Ring): SelfIntersection | null {
  * Shamos–Hoey sweep in x then y with a treap as the ordered status: O(n log n) for n edges.
  */
 export function findRingsIntersection(rings: readonly Ring[]): RingsIntersection | null {
+  if (rings.length === 1 && isStrictlyConvex(rings[0]!)) return null
   const edges = new RingEdges(rings)
   const status = new SweepStatus(edges.size, (s, t) => edges.compare(s, t))
   const test = (s: number, t: number): RingsIntersection | null => (s < 0 || t < 0 ? null : edges.meet(s, t))
@@ -66,6 +67,37 @@ export function findRingsIntersection(rings: readonly Ring[]): RingsIntersection
     if (hit) return hit
   }
   return null
+}
+
+/**
+ * True when the ring (distinct consecutive vertices, no closing vertex) is a strictly convex
+ * polygon: every turn goes the same way (exact orientation, no collinear vertex) and the edge
+ * directions wind round exactly once, which shows as exactly two sign changes of the edges' x
+ * steps. A ring turning one way throughout winds k times with 2k sign changes, so a star-shaped
+ * self-crossing ring (a pentagram, k = 2) fails. Such a ring is simple: O(n) instead of the sweep.
+ */
+export function isStrictlyConvex(ring: Ring): boolean {
+  const n = ring.length
+  if (n < 3) return false
+  let turn = 0
+  let changes = 0
+  let lastDx = 0
+  let firstDx = 0
+  for (let i = 0; i < n; i++) {
+    const a = ring[i]!
+    const b = ring[(i + 1) % n]!
+    const c = ring[(i + 2) % n]!
+    const o = orientXY(a[0], a[1], b[0], b[1], c[0], c[1])
+    if (o === 0 || (turn !== 0 && (o > 0) !== (turn > 0))) return false
+    turn = o
+    const dx = b[0] - a[0]
+    if (dx === 0) continue
+    if (firstDx === 0) firstDx = dx
+    else if ((dx > 0) !== (lastDx > 0)) changes++
+    lastDx = dx
+  }
+  if ((firstDx > 0) !== (lastDx > 0)) changes++
+  return changes === 2
 }
 
 /**

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { findRingsIntersection, findSelfIntersection } from '../../../shared/geometry/intersections'
+import { findRingsIntersection, findSelfIntersection, isStrictlyConvex } from '../../../shared/geometry/intersections'
 import { orient2d } from '../../../shared/geometry/orient'
 import type { Point } from '../../../shared/geometry/types'
 
@@ -164,5 +164,45 @@ describe('findRingsIntersection', () => {
 
   it('findRingsIntersection(outline, hole touching it at one vertex) reports the contact', () => {
     expect(findRingsIntersection([outline, [[50, 0], [60, 20], [40, 20]]])).not.toBeNull()
+  })
+})
+
+describe('isStrictlyConvex (the O(n) shortcut before the sweep)', () => {
+  it('accepts convex polygons of either orientation, from a triangle to a 1 000-gon (definition of convexity)', () => {
+    expect(isStrictlyConvex([[0, 0], [4, 0], [0, 3]])).toBe(true)
+    expect(isStrictlyConvex([[0, 0], [0, 3], [4, 0]])).toBe(true)
+    expect(isStrictlyConvex(ngon(1000, 200))).toBe(true)
+    expect(isStrictlyConvex(ngon(1000, 200).reverse())).toBe(true)
+    // Vertical edges (dx = 0) do not count as a change of direction.
+    expect(isStrictlyConvex([[0, 0], [10, 0], [10, 10], [0, 10]])).toBe(true)
+  })
+
+  it('rejects a pentagram, whose turns all go one way but which winds twice (and crosses itself)', () => {
+    const star = Array.from({ length: 5 }, (_, i): Point => [Math.cos((4 * Math.PI * i) / 5), Math.sin((4 * Math.PI * i) / 5)])
+    expect(isStrictlyConvex(star)).toBe(false)
+    expect(findSelfIntersection(star)).not.toBeNull() // still caught by the sweep
+  })
+
+  it('rejects a re-entrant corner and a collinear vertex (they go to the sweep)', () => {
+    expect(isStrictlyConvex([[0, 0], [10, 0], [10, 10], [5, 4], [0, 10]])).toBe(false)
+    expect(isStrictlyConvex([[0, 0], [5, 0], [10, 0], [10, 10], [0, 10]])).toBe(false)
+  })
+
+  it('agrees with the brute-force test: every ring it accepts has no meeting edges (random rings, seeded)', () => {
+    let seed = 7
+    const rand = (): number => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31)
+    let accepted = 0
+    for (let trial = 0; trial < 400; trial++) {
+      // Points at sorted or shuffled angles with random radii: some convex, most not, some crossing.
+      const n = 3 + Math.floor(rand() * 9)
+      const angles = Array.from({ length: n }, () => rand() * 2 * Math.PI)
+      if (trial % 2 === 0) angles.sort((a, b) => a - b)
+      const ring = angles.map((t): Point => { const r = trial % 3 === 0 ? 50 : 20 + 30 * rand(); return [r * Math.cos(t), r * Math.sin(t)] })
+      if (isStrictlyConvex(ring)) {
+        accepted++
+        expect(bruteForceMeets(ring)).toBe(false)
+      }
+    }
+    expect(accepted).toBeGreaterThan(20)
   })
 })
