@@ -46,10 +46,11 @@ export const useSketchStore = defineStore('sketch', () => {
   }
 
   function apply(change: Change, side: 'before' | 'after'): void {
+    // The revision first: synchronous watchers of `doc` (the live analysis) read the new one.
+    revision.value++
     if (change.kind === 'parts') doc.value = { ...doc.value, parts: change[side] }
     else if (change.kind === 'loading') doc.value = { ...doc.value, ...change[side] }
     else doc.value = { ...doc.value, settings: change[side] }
-    revision.value++
   }
 
   function commit(change: Change): void {
@@ -67,10 +68,10 @@ export const useSketchStore = defineStore('sketch', () => {
 
   /** Opens a sketch from the server; clears the history. */
   function load(sketch: SketchFull): void {
+    revision.value = 0
     doc.value = sketch.document
     meta.value = { id: sketch.id, title: sketch.title, project: sketch.project, description: sketch.description, status: sketch.status, version: sketch.version }
     history.clear()
-    revision.value = 0
   }
 
   /** Changes title/project/description/version (not undoable: they are not the document). */

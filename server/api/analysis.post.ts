@@ -8,6 +8,7 @@ import { MAX_VERTICES } from '../../shared/sketch/document'
  * and vertex; the answer never holds NaN or Infinity.
  */
 export default defineEventHandler(async (event) => {
+  const t0 = performance.now()
   await requireRole(event, 'analyse')
   const body = await readBodyAs(event, AnalysisRequest)
   let vertices = 0
@@ -16,13 +17,15 @@ export default defineEventHandler(async (event) => {
     throw createError({ statusCode: 413, message: `The section has ${vertices} vertices; the limit is ${MAX_VERTICES}. Use a coarser chord tolerance for arcs.` })
   }
   const result = withSectionErrors(() => analyseSection(body))
-  // Vertex coordinates come from the (finite) input and vertex stresses are n times a plane whose
-  // coefficients are checked here, so the walk can skip the two large arrays.
+  // The regions are the validated input rings (or Boolean results of them), so the walk skips
+  // them; the vertex stresses are checked with a flat loop.
   const { regions: _regions, stress, ...rest } = result
-  const summary = stress ? { ...stress, vertices: [] } : null
-  if (!allFinite(rest) || !allFinite(summary)) {
+  const finite = allFinite(rest) && (stress === null || (allFinite({ ...stress, vertices: [] }) && stress.vertices.every(v => v.values.every(Number.isFinite))))
+  if (!finite) {
     // A degenerate case slipped through the engine's own checks: say so instead of sending NaN.
     throw createError({ statusCode: 422, message: 'The section is too degenerate to analyse (a result was not finite). Check for sliver parts or zero-thickness walls.' })
   }
+  // Sign-in, parse, checks and the analysis (not the JSON encoding of the answer), for clients' timing.
+  setResponseHeader(event, 'Server-Timing', `analysis;dur=${(performance.now() - t0).toFixed(2)}`)
   return result
 })

@@ -1,5 +1,6 @@
 import { beforeEach, describe, expect, it } from 'vitest'
 import { createPinia, setActivePinia } from 'pinia'
+import { watch } from 'vue'
 import { emptyDocument, type SketchDocument } from '#shared/sketch/document'
 import { ringArea } from '#shared/geometry/moments'
 import { rectangleRing } from '#shared/editor/transform'
@@ -137,6 +138,16 @@ describe('sketch store: parts, each action with its undo', () => {
     s.undo()
     s.redo()
     expect(s.revision).toBe(3)
+  })
+
+  it('a synchronous watcher of the document already sees the new revision (the live analysis sends at once)', () => {
+    const s = fresh()
+    const seen: [number, number][] = []
+    const stop = watch(() => s.doc, doc => seen.push([doc.parts.length, s.revision]), { flush: 'sync' })
+    s.addPart({ outline: rectangleRing([0, 0], [1, 1]) })
+    s.undo()
+    stop()
+    expect(seen).toEqual([[1, 1], [0, 2]])
   })
 
   it('a new change after undo truncates redo', () => {
