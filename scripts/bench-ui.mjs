@@ -29,6 +29,22 @@ function section(n, R = 300) {
   return ring
 }
 
+/**
+ * BENCH_TRACE=1: a Chromium trace of the vertex edits, summed by event name on the page's main
+ * thread (inclusive times, so nested events count in their parents too): where the time after
+ * an answer goes (script, style, layout, paint).
+ */
+function printTrace(buffer) {
+  const { traceEvents } = JSON.parse(buffer.toString('utf8'))
+  const main = traceEvents.find(e => e.name === 'thread_name' && e.args?.name === 'CrRendererMain')
+  const total = new Map()
+  for (const e of traceEvents) {
+    if (!main || e.pid !== main.pid || e.tid !== main.tid || e.ph !== 'X' || !e.dur) continue
+    total.set(e.name, (total.get(e.name) ?? 0) + e.dur / 1000)
+  }
+  for (const [k, v] of [...total].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${v.toFixed(1).padStart(8)} ms  ${k}`)
+}
+
 /** BENCH_PROFILE=1: the 25 functions with the most self time during the drag (for finding hot spots). */
 function printProfile(profile) {
   const self = new Map()
@@ -54,7 +70,7 @@ function quantile(sorted, q) {
  * The sketcher on the same section: pointer move → next painted frame while a vertex is dragged,
  * and pointer up → the properties panel showing the new area (debounce + /api/analysis + render).
  */
-async function benchVertexDrag(page, at, n) {
+async function benchVertexDrag(page, at, n, cdp, browser) {
   await page.evaluate(() => {
     const w = window
     w.kwFrames = []
@@ -74,32 +90,47 @@ async function benchVertexDrag(page, at, n) {
       const now = performance.now()
       w.kwFollow.push(now - w.kwUp)
       const req = performance.getEntriesByType('resource').filter(e => e.name.includes('/api/analysis') && e.startTime >= w.kwUp).pop()
-      if (req) w.kwSplit.push([req.startTime - w.kwUp, req.responseEnd - req.startTime, now - req.responseEnd])
+      if (req) w.kwSplit.push({ up: w.kwUp, now, start: req.startTime, end: req.responseEnd, server: req.serverTiming?.find(t => t.name === 'analysis')?.duration ?? NaN })
       w.kwUp = 0
     })
       .observe(area, { attributes: true, attributeFilter: ['data-value'] })
   })
   const [px, py] = at(-120, -80)
   await page.mouse.click(px, py) // pick the part (away from the load on the centroid)
-  const REPS = 20
-  for (let rep = 0; rep < REPS; rep++) {
+  // The first edits after opening run cold code (JIT) on both sides: WARMUP edits are made but not counted.
+  const REPS = Number(process.env.BENCH_EDITS || 20)
+  const WARMUP = 3
+  if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start') }
+  if (process.env.BENCH_TRACE) await browser.startTracing(page, { categories: ['devtools.timeline', 'blink', 'v8.execute', 'disabled-by-default-devtools.timeline'] })
+  for (let rep = 0; rep < WARMUP + REPS; rep++) {
+    if (rep === WARMUP) await page.evaluate(() => { window.kwFrames = []; window.kwFollow = []; window.kwSplit = [] })
     // Where vertex 0 is now (snapping moves it off the pointer's path), from the vertex table (mm).
     const v = [Number(await page.getByTestId('vertex-0-x').inputValue()), Number(await page.getByTestId('vertex-0-y').inputValue())]
     const [sx, sy] = at(v[0], v[1])
     const seen = await page.evaluate(() => window.kwFollow.length)
     await page.mouse.move(sx, sy)
     await page.mouse.down()
-    for (let k = 1; k <= 10; k++) await page.mouse.move(sx + k * 1.5, sy + (rep % 2 ? k : -k))
+    for (let k = 1; k <= 10; k++) await page.mouse.move(sx + (rep % 2 ? -k : k) * 1.5, sy + (rep % 2 ? k : -k))
     await page.mouse.up()
     await page.waitForFunction(count => window.kwFollow.length > count, seen, { timeout: 3_000 }).catch(() => {}) // a drag that missed the vertex changes nothing: move on
   }
+  if (cdp) printProfile((await cdp.send('Profiler.stop')).profile)
+  if (process.env.BENCH_TRACE) printTrace(await browser.stopTracing())
   const frames = (await page.evaluate(() => window.kwFrames)).sort((a, b) => a - b)
   const follow = (await page.evaluate(() => window.kwFollow)).sort((a, b) => a - b)
   console.log(`vertex-drag-frame p50_ms=${quantile(frames, 0.5).toFixed(2)} p95_ms=${quantile(frames, 0.95).toFixed(2)} vertices=${n} (pointer move to the next painted frame)`)
-  const split = await page.evaluate(() => window.kwSplit)
+  // Each edit's answer: request start and end, the server's own time, and when the page took it in
+  // ('analysis-apply' runs from the parsed answer to the end of Vue's update of every reader).
+  const split = await page.evaluate(() => {
+    const applies = performance.getEntriesByName('analysis-apply')
+    return window.kwSplit.map((r) => {
+      const a = applies.find(e => e.startTime >= r.end && e.startTime <= r.now)
+      return [r.start - r.up, r.end - r.start, r.now - r.end, a ? a.startTime - r.end : NaN, a ? a.duration : NaN, r.server]
+    })
+  })
   const med = i => quantile(split.map(r => r[i]).sort((a, b) => a - b), 0.5).toFixed(1)
-  if (split.length) console.log(`properties-follow-split before_request_ms=${med(0)} request_ms=${med(1)} after_response_ms=${med(2)} vertices=${n} (medians)`)
-  console.log(`properties-follow p50_ms=${quantile(follow, 0.5).toFixed(1)} p95_ms=${quantile(follow, 0.95).toFixed(1)} vertices=${n} edits=${follow.length}/${REPS} (pointer up to the new area in the panel)`)
+  if (split.length) console.log(`properties-follow-split before_request_ms=${med(0)} request_ms=${med(1)} (server_ms=${med(5)}) after_response_ms=${med(2)} (parse_ms=${med(3)} apply_ms=${med(4)}) vertices=${n} (medians)`)
+  console.log(`properties-follow p50_ms=${quantile(follow, 0.5).toFixed(1)} p95_ms=${quantile(follow, 0.95).toFixed(1)} max_ms=${follow[follow.length - 1]?.toFixed(1)} vertices=${n} edits=${follow.length}/${REPS} after ${WARMUP} warm-up edits (pointer up to the new area in the panel)`)
 }
 
 async function main() {
@@ -150,8 +181,10 @@ async function main() {
       const [x0, y0] = at(0, 0)
       await page.mouse.move(x0, y0)
       await page.mouse.down()
+      // BENCH_PROFILE=1 profiles the load drag, BENCH_PROFILE=vertex the vertex edits.
       const cdp = process.env.BENCH_PROFILE ? await context.newCDPSession(page) : null
-      if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start') }
+      const profileLoad = cdp && process.env.BENCH_PROFILE !== 'vertex' ? cdp : null
+      if (profileLoad) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start') }
       // Out across the core edge and round a loop, back towards the centroid (no snapping on most steps).
       for (let k = 1; k <= STEPS; k++) {
         const t = k / STEPS
@@ -161,13 +194,13 @@ async function main() {
         await page.mouse.move(sx, sy)
       }
       await page.mouse.up()
-      if (cdp) printProfile((await cdp.send('Profiler.stop')).profile)
+      if (profileLoad) printProfile((await cdp.send('Profiler.stop')).profile)
       const durations = await page.evaluate(() => performance.getEntriesByName('drag-update').map(e => e.duration))
       durations.sort((a, b) => a - b)
       if (durations.length < STEPS / 2) console.warn(`[bench-ui] only ${durations.length} drag updates were measured for ${n} vertices`)
       if (n === SIZES[0]) console.log(`[bench-ui] page ${path.replace(id, ':id')}`)
       console.log(`drag-update p50_ms=${quantile(durations, 0.5).toFixed(2)} p95_ms=${quantile(durations, 0.95).toFixed(2)} vertices=${n}${process.env.BENCH_NO_TENSION ? ' view=no-tension' : ''}`)
-      await benchVertexDrag(page, at, n)
+      await benchVertexDrag(page, at, n, cdp && !profileLoad ? cdp : null, browser)
     }
   } finally {
     await browser.close()
