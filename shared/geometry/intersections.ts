@@ -206,6 +206,11 @@ class RingEdges {
     const q = this.hi[s]!
     const r = this.lo[t]!
     const u = this.hi[t]!
+    // Disjoint bounding boxes cannot meet (exact comparisons): most sweep neighbours end here.
+    const xs = this.xs
+    const ys = this.ys
+    if (xs[p]! > xs[u]! || xs[r]! > xs[q]!) return null
+    if (Math.max(ys[p]!, ys[q]!) < Math.min(ys[r]!, ys[u]!) || Math.max(ys[r]!, ys[u]!) < Math.min(ys[p]!, ys[q]!)) return null
     const dp = this.orient(t, p)
     const dq = this.orient(t, q)
     const dr = this.orient(s, r)
