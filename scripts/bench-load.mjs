@@ -1,5 +1,6 @@
 // npm run bench:load: autocannon on loopback against the built server with a temporary database.
-// Prints requests/s and latency percentiles for health, a sketch list and 1 000-vertex analyses.
+// Prints requests/s and latency percentiles for health, a sketch list and 1 000-vertex analyses
+// (10 connections, so the server is saturated: this is throughput, npm run bench has the latency).
 import { mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
@@ -8,11 +9,13 @@ import { buildIfStale, freePort, startServer } from './lib.mjs'
 
 const DURATION = Number(process.env.BENCH_SECONDS || 8)
 
+/** A wavy ring of n vertices (simple, not convex, so the full self-intersection sweep runs), full-precision coordinates (mm). */
 function ring(n, r) {
   const pts = []
   for (let i = 0; i < n; i++) {
     const t = (2 * Math.PI * i) / n
-    pts.push([r * Math.cos(t), r * Math.sin(t)])
+    const rr = r * (1 + 0.05 * Math.sin(7 * t))
+    pts.push([rr * Math.cos(t), rr * Math.sin(t)])
   }
   return pts
 }
