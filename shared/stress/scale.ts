@@ -57,6 +57,15 @@ export function formatNumber(value: number, digits = 3): string {
   return s.replace('-', '−')
 }
 
+/** Coordinates closer to zero than this (mm, a nanometre) are rounding noise of the mechanics and read 0. */
+const POINT_ZERO_MM = 1e-6
+
+/** A point (mm) in display units, "(x, y)" with 4 significant digits; rounding noise reads 0, not 6.1e−14. */
+export function formatPoint(x: number, y: number, units: DisplayUnits): string {
+  const f = (v: number): string => formatNumber(Math.abs(v) < POINT_ZERO_MM ? 0 : v * units.length.perMm, 4)
+  return `(${f(x)}, ${f(y)})`
+}
+
 /**
  * A stress (MPa, tension positive) as a display string with its C/T letter and unit:
  * "12.4 MPa C" for −12.4 MPa. Values within `zeroTol` MPa of zero read "0 MPa".

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { STRESS_COLOURS, displayUnits, formatNumber, formatStress, hexToLinear, legendTicks, lightness, stressScale } from '../../../shared/stress/scale'
+import { STRESS_COLOURS, displayUnits, formatNumber, formatPoint, formatStress, hexToLinear, legendTicks, lightness, stressScale } from '../../../shared/stress/scale'
 import { expectClose } from '../../support/expect-close'
 
 /** Deuteranopia / protanopia simulation matrices (Machado, Oliveira & Fernandes 2009, severity 1), linear RGB. */
@@ -67,5 +67,14 @@ describe('legendTicks', () => {
     expect(ticks[0]!.label.endsWith('C')).toBe(true)
     expect(ticks[ticks.length - 1]!.label.endsWith('T')).toBe(true)
     expect(ticks.map(t => t.value)).toEqual([-8, -6, -4, -2, 0, 2])
+  })
+})
+
+describe('formatPoint', () => {
+  it('formatPoint shows a point in display units and reads roundoff noise as 0 (25.4 mm per inch, by definition)', () => {
+    const si = displayUnits('SI')
+    expect(formatPoint(-500, 6.123e-14, si)).toBe('(−500.0, 0)')
+    expect(formatPoint(200, -300, si)).toBe('(200.0, −300.0)')
+    expect(formatPoint(254, 2e-6, displayUnits('US'))).toBe('(10.00, 7.874e−8)')
   })
 })
