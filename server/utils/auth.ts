@@ -24,8 +24,9 @@ export async function requireUser(event: H3Event): Promise<User> {
   if (header) {
     const match = /^Bearer\s+(\S+)\s*$/i.exec(header)
     if (!match) throw createError({ statusCode: 401, message: 'The Authorization header must be "Bearer <token>".' })
-    const token = await cachedToken(hashToken(match[1]!), async () => {
-      const row = await db.ApiToken.findOne({ where: { tokenHash: hashToken(match[1]!) } })
+    const tokenHash = hashToken(match[1]!)
+    const token = await cachedToken(tokenHash, async () => {
+      const row = await db.ApiToken.findOne({ where: { tokenHash } })
       return row ? { id: row.id, userId: row.userId, lastUsedAt: row.lastUsedAt } : null
     })
     if (!token) throw createError({ statusCode: 401, message: 'This API token is not valid or has been revoked.' })
