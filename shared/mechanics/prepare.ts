@@ -1,7 +1,7 @@
 import { ringsBounds } from '../geometry/bounds'
 import polygonClipping from 'polygon-clipping'
 import type { MultiPolygon as ClipMultiPolygon, Polygon as ClipPolygon } from 'polygon-clipping'
-import { ringsHull } from '../geometry/hull'
+import { regionsHull } from '../geometry/hull'
 import { findRingsIntersection, type RingsIntersection } from '../geometry/intersections'
 import { ringArea } from '../geometry/moments'
 import { describeRing, normaliseRing, orientRing, type NormalisedRing, type RingLocation } from '../geometry/normalise'
@@ -80,7 +80,7 @@ export function prepareSection(parts: readonly PartInput[], options: PrepareOpti
     referenceE,
     origin: [(bounds.minX + bounds.maxX) / 2, (bounds.minY + bounds.maxY) / 2],
     bounds,
-    hull: ringsHull(outlines),
+    hull: regionsHull(regions),
     parts: preparedParts,
     warnings,
   }
