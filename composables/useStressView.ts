@@ -50,15 +50,19 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   const docLoads = computed(() => doc.value.loads)
   const cases = computed(() => doc.value.cases)
   const combinations = computed(() => doc.value.combinations)
-  /** Name, E and allowable stress of each part's material, as a string so that equal lists compare equal. */
-  const allowables = computed(() => JSON.stringify(doc.value.parts.map(p => [p.material.name ?? null, p.material.E, p.material.allowable ?? null])))
+  /** Name, E and allowable stress of each part's material; the previous list is kept while the values are equal, so readers are not re-run. */
+  const allowables = computed<[string | null, number, number | null][]>((previous) => {
+    const next = doc.value.parts.map((p): [string | null, number, number | null] => [p.material.name ?? null, p.material.E, p.material.allowable ?? null])
+    const same = previous && previous.length === next.length && next.every((m, i) => m[0] === previous[i]![0] && m[1] === previous[i]![1] && m[2] === previous[i]![2])
+    return same ? previous : next
+  })
   const anyNoTension = computed(() => doc.value.parts.some(p => p.material.noTension === true))
 
   const section = computed(() => {
     // Plain data, not reactive proxies: the hot loops below read every vertex on every frame.
     const a = analysis.value ? toRaw(analysis.value) : null
     if (!a) return null
-    const materials = JSON.parse(allowables.value) as [string | null, number, number | null][]
+    const materials = allowables.value
     const regions: ViewRegion[] = a.regions.map((r) => {
       const allowable = materials.find(m => m[0] === r.name && m[1] === r.E)?.[2] ?? null
       // markRaw: vue-konva deep-watches and stores its configs reactively; big vertex arrays must stay plain.
