@@ -36,7 +36,13 @@ export const useSketchStore = defineStore('sketch', () => {
   const meta = ref<SketchMeta | null>(null)
   const revision = ref(0)
 
+  // Each slice is its own computed: an edit replaces only what it changes, so a reader of the
+  // loads or the settings is not re-run (nor its component re-rendered) when a vertex moves.
   const parts = computed(() => doc.value.parts)
+  const settings = computed(() => doc.value.settings)
+  const loads = computed(() => doc.value.loads)
+  const cases = computed(() => doc.value.cases)
+  const combinations = computed(() => doc.value.combinations)
   const bounds = computed(() => ops.partsBounds(doc.value.parts))
   const canUndo = computed(() => history.canUndo)
   const canRedo = computed(() => history.canRedo)
@@ -300,7 +306,7 @@ export const useSketchStore = defineStore('sketch', () => {
   }
 
   return {
-    doc, meta, revision, parts, bounds, canUndo, canRedo,
+    doc, meta, revision, parts, settings, loads, cases, combinations, bounds, canUndo, canRedo,
     load, setMeta, partById,
     addPart, renamePart, removeParts, duplicateParts, moveParts, rotateParts, mirrorParts,
     moveVertex, insertVertex, deleteVertex, makeHollow, makeHole, setHoleKind, removeHole,

@@ -150,6 +150,19 @@ describe('sketch store: parts, each action with its undo', () => {
     expect(seen).toEqual([[1, 1], [0, 2]])
   })
 
+  it('moving a vertex re-runs readers of the parts only: settings, loads, cases and combinations are not triggered', () => {
+    const s = fresh()
+    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
+    s.addLoad({ caseId: 'case-1', P: 1000, x: 50, y: 25 })
+    const runs = { parts: 0, settings: 0, loads: 0, cases: 0, combinations: 0 }
+    const stops = (Object.keys(runs) as (keyof typeof runs)[]).map(k => watch(() => s[k], () => { runs[k]++ }, { flush: 'sync' }))
+    s.moveVertex(id, 0, 2, [120, 60])
+    s.undo()
+    s.updateLoad(s.doc.loads[0]!.id, { P: 2000 })
+    stops.forEach(stop => stop())
+    expect(runs).toEqual({ parts: 2, settings: 0, loads: 1, cases: 0, combinations: 0 })
+  })
+
   it('a new change after undo truncates redo', () => {
     const s = fresh()
     const id = s.addPart({ outline: rectangleRing([0, 0], [1, 1]) })
