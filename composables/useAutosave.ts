@@ -105,3 +105,6 @@ export function useAutosave(delayMs = 800) {
 
   return { status, message, dirty, save, reloadTheirs, keepMineAsCopy, markLoaded }
 }
+
+/** The open sketch's autosave, as the editor page and the save indicator share it. */
+export type Autosave = ReturnType<typeof useAutosave>
