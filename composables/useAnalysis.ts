@@ -37,8 +37,8 @@ export function useLiveAnalysis(debounceMs = 0) {
   let timer: ReturnType<typeof setTimeout> | null = null
 
   async function send(doc: SketchDocument, revision: number): Promise<void> {
-    const body: AnalysisRequestBody | null = analysisRequestFor(doc)
-    if (!body) {
+    const request: AnalysisRequestBody | null = analysisRequestFor(doc)
+    if (!request) {
       state.value = { ...state.value, result: null, error: null, errorAt: null, pending: false, revision }
       return
     }
@@ -46,10 +46,13 @@ export function useLiveAnalysis(debounceMs = 0) {
     const t0 = performance.now()
     // fetch itself, not $fetch: the request leaves now, before Vue re-renders the edit, instead of
     // after $fetch's own awaits have let the whole re-render run first.
-    const request = fetch('/api/analysis', { method: 'POST', headers: { 'content-type': 'application/json', accept: 'application/json' }, body: JSON.stringify(body) })
+    // The editor derives the core and the vertex stresses from the properties (useStressView), so
+    // the answer leaves them out: for thousands of vertices they are most of its size.
+    const body: AnalysisRequestBody = { ...request, omit: ['kern', 'vertexStresses'] }
+    const response = fetch('/api/analysis', { method: 'POST', headers: { 'content-type': 'application/json', accept: 'application/json' }, body: JSON.stringify(body) })
     state.value = { ...state.value, pending: true }
     try {
-      const result = await answerOf<AnalysisResponse>(await request)
+      const result = await answerOf<AnalysisResponse>(await response)
       const t1 = performance.now()
       state.value = { ...state.value, result, error: null, errorAt: null, revision, ms: t1 - t0 }
       // For npm run bench:ui: how long the page takes to take in a new answer (Vue's update of every reader).

@@ -7,6 +7,7 @@ import { checkUtilisation } from '#shared/stress/check'
 import { evaluateFrame, type FrameRegion } from '#shared/stress/frame'
 import { displayUnits, stressScale } from '#shared/stress/scale'
 import { regionsHull } from '#shared/geometry/hull'
+import { kernPolygon } from '#shared/mechanics/kern'
 import type { Ring } from '#shared/geometry/types'
 
 /** A material region of the view: FrameRegion plus the limits of its check (MPa). */
@@ -69,7 +70,10 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
       const rings: Ring[] = markRaw(r.polygons.flat().map(ring => markRaw(ring as Ring[number][]) as Ring))
       return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, allowable }
     })
-    return { props: a.properties, hull: markRaw(regionsHull(a.regions)) as Ring, kern: markRaw(a.kern as Ring[number][]) as Ring, regions, shear: a.shear, warnings: a.warnings }
+    const hull = markRaw(regionsHull(a.regions)) as Ring
+    // The live analysis leaves the core out of the answer (`omit`): the same function the server runs gives it here.
+    const kern = markRaw((a.kern ?? kernPolygon(a.properties, hull)) as Ring[number][]) as Ring
+    return { props: a.properties, hull, kern, regions, shear: a.shear, warnings: a.warnings }
   })
 
   const show = computed(() => settings.value.show)

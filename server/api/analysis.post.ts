@@ -1,4 +1,4 @@
-import { AnalysisRequest } from '../../shared/analysis/contract'
+import { AnalysisRequest, type AnalysisResponse } from '../../shared/analysis/contract'
 import { analyseSection } from '../../shared/mechanics/analyze'
 import { MAX_VERTICES } from '../../shared/sketch/document'
 
@@ -27,5 +27,8 @@ export default defineEventHandler(async (event) => {
   }
   // Sign-in, parse, checks and the analysis (not the JSON encoding of the answer), for clients' timing.
   setResponseHeader(event, 'Server-Timing', `analysis;dur=${(performance.now() - t0).toFixed(2)}`)
-  return result
+  const answer: AnalysisResponse = result
+  if (body.omit.includes('kern')) delete answer.kern
+  if (body.omit.includes('vertexStresses') && answer.stress) delete answer.stress.vertices
+  return answer
 })

@@ -40,11 +40,25 @@ export const AnalysisRequest = z.object({
   noTension: z.boolean().default(false),
   referenceE: finite('referenceE').refine(v => v > 0, 'referenceE must be positive (MPa)').optional(),
   effectiveLength: finite('effectiveLength').refine(v => v > 0, 'effectiveLength must be positive (mm)').optional(),
+  /**
+   * Parts of the answer the caller derives itself and need not be sent: `kern` (the core polygon,
+   * `kernPolygon(properties, regionsHull(regions))`) and `vertexStresses` (`stress.vertices`, the
+   * plane at each vertex). For a section of thousands of vertices they are most of the answer.
+   */
+  omit: z.array(z.enum(['kern', 'vertexStresses'], { error: 'omit lists "kern" and/or "vertexStresses"' })).max(2).default([]),
 })
 export type AnalysisRequestBody = z.input<typeof AnalysisRequest>
+/** What `omit` may leave out of the answer. */
+export type AnalysisOmission = z.infer<typeof AnalysisRequest>['omit'][number]
 
-/** Answer of POST /api/analysis (see shared/mechanics/analyze.ts), plus the chord tolerance used. */
-export type AnalysisResponse = AnalysisOutput
+/**
+ * Answer of POST /api/analysis (see shared/mechanics/analyze.ts): `kern` and `stress.vertices` are
+ * absent when the request's `omit` names them.
+ */
+export type AnalysisResponse = Omit<AnalysisOutput, 'kern' | 'stress'> & {
+  kern?: AnalysisOutput['kern']
+  stress: (Omit<NonNullable<AnalysisOutput['stress']>, 'vertices'> & { vertices?: NonNullable<AnalysisOutput['stress']>['vertices'] }) | null
+}
 export type AnalysisRegion = AnalysisOutput['regions'][number]
 
 /** Body of a geometry error (422): where the problem is. */

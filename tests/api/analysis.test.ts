@@ -89,7 +89,32 @@ describe('POST /api/analysis', () => {
     expect(r.body.contact.peak).toBeNull()
   })
 
+  it('omit leaves the core and the vertex stresses out of the answer, and changes nothing else', async () => {
+    const body = { parts: [{ outline: rect(300, 200) }], loads: [{ P: 600_000, x: 190, y: 100 }] }
+    const full = await c.post('/api/analysis', body)
+    const lean = await c.post('/api/analysis', { ...body, omit: ['kern', 'vertexStresses'] })
+    expect(lean.status).toBe(200)
+    expect(full.body.kern).toHaveLength(4)
+    expect(full.body.stress.vertices).toHaveLength(1)
+    expect(lean.body).not.toHaveProperty('kern')
+    expect(lean.body.stress).not.toHaveProperty('vertices')
+    const { kern: _k, stress: { vertices: _v, ...fullStress }, ...fullRest } = full.body
+    const { stress: leanStress, ...leanRest } = lean.body
+    expect(leanStress).toEqual(fullStress)
+    expect(leanRest).toEqual(fullRest)
+    expect(lean.text.length).toBeLessThan(full.text.length)
+  })
+
+  it('omit keeps what it does not name, and with no loads there is no stress to trim', async () => {
+    const r = await c.post('/api/analysis', { parts: [{ outline: rect(100, 100) }], omit: ['vertexStresses'] })
+    expect(r.status).toBe(200)
+    expect(r.body.kern).toHaveLength(4)
+    expect(r.body.stress).toBeNull()
+  })
+
   it.each([
+    [{ parts: [{ outline: rect(10, 10) }], omit: ['regions'] }, 400, /omit lists "kern" and\/or "vertexStresses"/],
+    [{ parts: [{ outline: rect(10, 10) }], omit: 'kern' }, 400, /omit/],
     [{ parts: [] }, 400, /at least one part/],
     [{ parts: [{ outline: [[0, 0], [1, 0]] }] }, 422, /part 1/i],
     [{ parts: [{ outline: [[0, 0], [10, 10], [10, 0], [0, 10]] }] }, 422, /part 1.*(intersect|cross)/i],

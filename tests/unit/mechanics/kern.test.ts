@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import type { Point, Ring } from '../../../shared/geometry/types'
+import { regionsHull } from '../../../shared/geometry/hull'
+import { analyseSection } from '../../../shared/mechanics/analyze'
 import { kernPolygon } from '../../../shared/mechanics/kern'
 import { inKern, kernMargin } from '../../../shared/mechanics/stress'
 import type { InertiaLike } from '../../../shared/mechanics/stress'
@@ -158,6 +160,17 @@ describe('kernPolygon', () => {
     ['a two-point hull', { area: 4, centroid: { x: 0, y: 0 }, Ixx: 1, Iyy: 1, Ixy: 0 }, [[0, 0], [1, 0]] as Ring],
   ])('kernPolygon(%s) returns an empty ring', (_n, p, hull) => {
     expect(kernPolygon(p, hull)).toEqual([])
+  })
+
+  it('kernPolygon(properties, regionsHull(regions)) of an answer is the answer\'s own kern (what a client that omits it derives)', () => {
+    // A T-stub with a slot and a welded plate: several parts, a hole and an unsymmetric hull.
+    const a = analyseSection({
+      parts: [
+        { outline: [[-120, 0], [120, 0], [120, 20], [15, 20], [15, 200], [-15, 200], [-15, 20], [-120, 20]], holes: [[[-5, 60], [5, 60], [5, 120], [-5, 120]]] },
+        { outline: rect(15, 150, 175, 160), material: { E: 70_000 } },
+      ],
+    })
+    expect(kernPolygon(a.properties, regionsHull(a.regions))).toEqual(a.kern)
   })
 
   it('kernPolygon(a non-convex ring) throws a SectionError', () => {
