@@ -115,7 +115,7 @@ async function benchVertexDrag(page, at, n, cdp, browser) {
     await page.waitForFunction(count => window.kwFollow.length > count, seen, { timeout: 3_000 }).catch(() => {}) // a drag that missed the vertex changes nothing: move on
   }
   if (cdp) printProfile((await cdp.send('Profiler.stop')).profile)
-  if (process.env.BENCH_TRACE) printTrace(await browser.stopTracing())
+  if (process.env.BENCH_TRACE) { const b = await browser.stopTracing(); if (process.env.BENCH_TRACE_FILE) (await import('node:fs')).writeFileSync(process.env.BENCH_TRACE_FILE, b); printTrace(b) }
   const frames = (await page.evaluate(() => window.kwFrames)).sort((a, b) => a - b)
   const follow = (await page.evaluate(() => window.kwFollow)).sort((a, b) => a - b)
   console.log(`vertex-drag-frame p50_ms=${quantile(frames, 0.5).toFixed(2)} p95_ms=${quantile(frames, 0.95).toFixed(2)} vertices=${n} (pointer move to the next painted frame)`)
