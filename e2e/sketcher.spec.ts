@@ -274,6 +274,60 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
   expect(Math.abs(q.x - p.x) + Math.abs(q.y - p.y)).toBeLessThan(0.5)
 })
 
+test('a dragged vertex waits for its analysis: drawing and properties change in one frame, and a slow answer does not hold the edit', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  await page.getByTestId('new-sketch').click()
+  await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
+  await page.getByTestId('tool-box').click()
+  let at = await transform(page)
+  await drag(page, at(-100, -50), at(100, 50))
+  await expectArea(page, 200 * 100)
+
+  // A prompt answer: record, per animation frame, when the vertex table and the area change.
+  at = await transform(page)
+  await page.mouse.click(at(0, 0).x, at(0, 0).y)
+  await expect(page.getByTestId('vertex-2-x')).toHaveValue('100')
+  // Sample both in every animation frame, as it is about to be painted.
+  await page.evaluate(() => {
+    const w = window as unknown as { kwSeen: Record<string, number> }
+    const x = () => (document.querySelector('[data-testid="vertex-2-x"]') as HTMLInputElement | null)?.value
+    const area = () => document.querySelector('[data-testid="prop-area"]')?.getAttribute('data-value')
+    const x0 = x()
+    const a0 = area()
+    let frame = 0
+    w.kwSeen = {}
+    const tick = () => {
+      frame++
+      if (!('x' in w.kwSeen) && x() !== x0) w.kwSeen.x = frame
+      if (!('area' in w.kwSeen) && area() !== a0) w.kwSeen.area = frame
+      requestAnimationFrame(tick)
+    }
+    requestAnimationFrame(tick)
+  })
+  await drag(page, at(100, 50), at(140, 50))
+  await expect(page.getByTestId('vertex-2-x')).toHaveValue('140')
+  await expectArea(page, shoelace(await readVertices(page)))
+  const seen = await page.evaluate(() => (window as unknown as { kwSeen: Record<string, number> }).kwSeen)
+  expect(seen.x).toBeGreaterThan(0)
+  expect(seen.area, 'the area and the moved vertex change in the same frame').toBe(seen.x)
+
+  // A slow answer (3 s): the edit is committed anyway within the hold (120 ms), the panel says
+  // the numbers are pending, and they follow when the answer comes.
+  await page.route('**/api/analysis', async (route) => {
+    await new Promise(r => setTimeout(r, 3000))
+    await route.continue()
+  })
+  const t0 = Date.now()
+  await drag(page, at(140, 50), at(140, 90))
+  await expect(page.getByTestId('vertex-2-y')).toHaveValue('90', { timeout: 2000 })
+  expect(Date.now() - t0).toBeLessThan(2500)
+  await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'pending')
+  await expect(page.getByTestId('properties-status')).toHaveText('updating…')
+  await page.unroute('**/api/analysis')
+  await expectArea(page, shoelace(await readVertices(page)))
+  await shot(page, 'sketcher-vertex-held')
+})
+
 test('a vertex of a 2 000-vertex section can be dragged (its speed is measured by npm run bench:ui)', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
   const n = 2000

@@ -18,6 +18,16 @@ export interface NewPart {
   shape?: SketchPart['shape']
 }
 
+/**
+ * What a gesture passes to hold its change back until the change's analysis is in: given the
+ * document as it will be, it starts that analysis and returns a promise that settles with it
+ * (or null when there is nothing to wait for). See `stageParts`.
+ */
+export type Hold = (next: SketchDocument) => Promise<unknown> | null
+
+/** How long a held change waits for its analysis at most (ms) before it is committed anyway. */
+export const HOLD_MS = 120
+
 /** The sketch's identity and save state beside the document. */
 export type SketchMeta = Pick<SketchSummary, 'id' | 'title' | 'project' | 'description' | 'status' | 'version'>
 
@@ -64,8 +74,51 @@ export const useSketchStore = defineStore('sketch', () => {
     history.push(change)
   }
 
-  function commitParts(label: string, after: SketchPart[]): void {
-    commit({ kind: 'parts', label, before: doc.value.parts, after })
+  function commitParts(label: string, after: SketchPart[], hold?: Hold): void {
+    if (hold) stageParts(label, after, hold({ ...doc.value, parts: after }))
+    else commit({ kind: 'parts', label, before: doc.value.parts, after })
+  }
+
+  // ---- a gesture's change, held until its analysis is in -------------------------------
+
+  /** The change a gesture has drawn but not yet committed (the canvas keeps its ghost meanwhile). */
+  const staged = shallowRef<{ label: string; after: SketchPart[]; timer: ReturnType<typeof setTimeout> } | null>(null)
+
+  /** Commits the held change now, if there is one. Every other action calls it first. */
+  function flushStaged(): void {
+    const s = staged.value
+    if (!s) return
+    clearTimeout(s.timer)
+    staged.value = null
+    commit({ kind: 'parts', label: s.label, before: doc.value.parts, after: s.after })
+  }
+
+  /**
+   * Holds a parts change that a gesture already shows (a dragged vertex, moved or rotated parts)
+   * until `ready` settles, at most HOLD_MS, or until any other action: then it is committed as
+   * usual (history, revision, autosave). The drawing and the properties of the edit then change in
+   * one update, and the browser does not render the edit while the server computes its answer.
+   */
+  function stageParts(label: string, after: SketchPart[], ready: Promise<unknown> | null): void {
+    flushStaged()
+    const entry = { label, after, timer: setTimeout(flushStaged, HOLD_MS) }
+    staged.value = entry
+    if (!ready) return flushStaged()
+    void ready.finally(() => {
+      if (staged.value === entry) flushStaged()
+    })
+  }
+
+  /** The same actions, each committing a held change before it runs (it may read the parts). */
+  function allAfterStaged<T extends Record<string, (...args: never[]) => unknown>>(actions: T): T {
+    const wrapped: Record<string, unknown> = {}
+    for (const [name, action] of Object.entries(actions)) {
+      wrapped[name] = (...args: never[]) => {
+        flushStaged()
+        return action(...args)
+      }
+    }
+    return wrapped as T
   }
 
   function commitLoading(label: string, after: Partial<Loading>): void {
@@ -74,6 +127,9 @@ export const useSketchStore = defineStore('sketch', () => {
 
   /** Opens a sketch from the server; clears the history. */
   function load(sketch: SketchFull): void {
+    // A change held for the sketch being replaced is dropped with it.
+    if (staged.value) clearTimeout(staged.value.timer)
+    staged.value = null
     revision.value = 0
     doc.value = sketch.document
     meta.value = { id: sketch.id, title: sketch.title, project: sketch.project, description: sketch.description, status: sketch.status, version: sketch.version }
@@ -127,15 +183,15 @@ export const useSketchStore = defineStore('sketch', () => {
   }
 
   /** Moves parts by (dx, dy) mm. */
-  function moveParts(ids: string[], dx: number, dy: number): void {
+  function moveParts(ids: string[], dx: number, dy: number, hold?: Hold): void {
     if (ids.length === 0 || (dx === 0 && dy === 0)) return
-    commitParts('Move', ops.moveParts(doc.value.parts, ids, dx, dy))
+    commitParts('Move', ops.moveParts(doc.value.parts, ids, dx, dy), hold)
   }
 
   /** Rotates parts counter-clockwise by `deg` about `centre` (default: the selection's centre). */
-  function rotateParts(ids: string[], deg: number, centre?: Point): void {
+  function rotateParts(ids: string[], deg: number, centre?: Point, hold?: Hold): void {
     if (ids.length === 0 || !Number.isFinite(deg) || deg % 360 === 0) return
-    commitParts(`Rotate ${deg}°`, ops.rotateParts(doc.value.parts, ids, deg, centre ?? ops.selectionCentre(doc.value.parts, ids)))
+    commitParts(`Rotate ${deg}°`, ops.rotateParts(doc.value.parts, ids, deg, centre ?? ops.selectionCentre(doc.value.parts, ids)), hold)
   }
 
   /** Mirrors parts: axis 'x' flips x, 'y' flips y, about the selection's centre. */
@@ -145,8 +201,8 @@ export const useSketchStore = defineStore('sketch', () => {
   }
 
   /** Moves vertex `index` of ring `ring` (0 outline, k hole k-1) of a part to `point` (mm). */
-  function moveVertex(id: string, ring: number, index: number, point: Point): void {
-    commitParts('Move vertex', ops.updateOne(doc.value.parts, id, p => ops.vertexOps.move(p, ring, index, point)))
+  function moveVertex(id: string, ring: number, index: number, point: Point, hold?: Hold): void {
+    commitParts('Move vertex', ops.updateOne(doc.value.parts, id, p => ops.vertexOps.move(p, ring, index, point)), hold)
   }
 
   /** Inserts `point` after vertex `edge` of a ring (on that edge). */
@@ -305,13 +361,19 @@ export const useSketchStore = defineStore('sketch', () => {
     return c?.label ?? null
   }
 
-  return {
-    doc, meta, revision, parts, settings, loads, cases, combinations, bounds, canUndo, canRedo,
-    load, setMeta, partById,
+  // Every action that changes the document commits a held change first, so it reads (and its
+  // undo restores) the parts as the user last saw them drawn.
+  const actions = allAfterStaged({
     addPart, renamePart, removeParts, duplicateParts, moveParts, rotateParts, mirrorParts,
     moveVertex, insertVertex, deleteVertex, makeHollow, makeHole, setHoleKind, removeHole,
     unionParts, subtractParts, setMaterial, updateSettings, setShow,
     addLoad, updateLoad, moveLoad, removeLoad, addCase, renameCase, removeCase, setCaseMoments,
     addCombination, updateCombination, removeCombination, undo, redo,
+  })
+
+  return {
+    doc, meta, revision, parts, settings, loads, cases, combinations, bounds, canUndo, canRedo, staged,
+    load, setMeta, partById, flushStaged,
+    ...actions,
   }
 })
