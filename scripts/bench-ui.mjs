@@ -109,9 +109,17 @@ async function benchVertexDrag(page, at, n, cdp, browser) {
     const [sx, sy] = at(v[0], v[1])
     const seen = await page.evaluate(() => window.kwFollow.length)
     await page.mouse.move(sx, sy)
+    // Alt holds snapping off: a snap onto a neighbouring corner would merge the two (one vertex
+    // fewer) and the next press would pick another vertex.
+    await page.keyboard.down('Alt')
     await page.mouse.down()
-    for (let k = 1; k <= 10; k++) await page.mouse.move(sx + (rep % 2 ? -k : k) * 1.5, sy + (rep % 2 ? k : -k))
+    // Vertex 0 sits at angle 0 on the ring: out 15 px along +x, then back 10 px, so the moved corner
+    // never crosses its neighbours (on 20 000 vertices they are 0.09 mm apart, and a drag along the
+    // ring made it cross itself: a 422, no new area, an edit not counted) and never lands back among
+    // them (where the next press would pick a neighbour instead).
+    for (let k = 1; k <= 10; k++) await page.mouse.move(sx + (rep % 2 ? -k : 1.5 * k), sy)
     await page.mouse.up()
+    await page.keyboard.up('Alt')
     await page.waitForFunction(count => window.kwFollow.length > count, seen, { timeout: 3_000 }).catch(() => {}) // a drag that missed the vertex changes nothing: move on
   }
   if (cdp) printProfile((await cdp.send('Profiler.stop')).profile)
