@@ -1,6 +1,6 @@
 import { ringsBounds } from '#shared/geometry/bounds'
 import type { Bounds } from '#shared/geometry/types'
-import { envelopeBands, isolinesInRings, isolineValues, lineAcrossBox, longestSegment, planeGradient } from '#shared/stress/field'
+import { envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient } from '#shared/stress/field'
 import { formatNumber, formatStress, STRESS_COLOURS } from '#shared/stress/scale'
 import { emptyScene, type StressScene } from './useStressPaint'
 
@@ -28,14 +28,13 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
     if ((f.kind === 'plane' || contact) && plane) {
       for (const r of regions) s.fields.push({ rings: r.rings, gradient: planeGradient(plane, r.n, r.rings, scale, contact ? 0 : Infinity), fill: STRESS_COLOURS.neutral })
       const values = isolineValues(f.min?.value ?? 0, contact ? 0 : (f.max?.value ?? 0), 6, u.stress.perMPa)
-      // Every isoline of a region in one pass over its edges.
-      const perRegion = regions.map(r => isolinesInRings(r.rings, r.n * plane.a, r.n * plane.b, r.n * plane.c, values))
+      const tmp: number[] = []
       values.forEach((v, vi) => {
         const t = vi % 2 === 0 ? 0.3 : 0.7
         let bestLen = -1
         let at: [number, number] | null = null
-        for (const lines of perRegion) {
-          const tmp = lines[vi]!
+        for (const r of regions) {
+          lineInRings(r.rings, r.n * plane.a - v, r.n * plane.b, r.n * plane.c, tmp)
           for (const q of tmp) s.iso.push(q)
           const k = longestSegment(tmp)
           if (k < 0) continue

@@ -107,61 +107,6 @@ export function lineInRings(rings: readonly Ring[], a: number, b: number, c: num
   return out
 }
 
-/**
- * The isolines a + b·x + c·y = v for every v of `values` (MPa or any unit of the plane) inside the
- * rings (even-odd), in one pass over the edges: `out[k]` gets the flat segments of values[k], as
- * lineInRings(rings, a − v, b, c) would give them. Each edge is evaluated once and only the values
- * it crosses are visited, so k isolines cost about one line, not k. Returns `out`.
- */
-export function isolinesInRings(rings: readonly Ring[], a: number, b: number, c: number, values: readonly number[], out: number[][] = []): number[][] {
-  out.length = values.length
-  for (let k = 0; k < values.length; k++) out[k] = []
-  const g2 = b * b + c * c
-  if (!(g2 > 0) || values.length === 0) return out
-  const g = Math.sqrt(g2)
-  const dx = -c / g
-  const dy = b / g
-  // Visit the values in ascending order; `order[j]` is the index of the j-th smallest.
-  const order = values.map((_, k) => k).sort((i, j) => values[i]! - values[j]!)
-  const sorted = order.map(k => values[k]!)
-  const along: number[][] = values.map(() => [])
-  for (const ring of rings) {
-    const n = ring.length
-    if (n < 2) continue
-    let p = ring[n - 1]!
-    let gp = a + b * p[0] + c * p[1]
-    for (let i = 0; i < n; i++) {
-      const q = ring[i]!
-      const gq = a + b * q[0] + c * q[1]
-      // The edge crosses v when exactly one end lies below it: min < v ≤ max.
-      const lo = gp < gq ? gp : gq
-      const hi = gp < gq ? gq : gp
-      if (hi > lo) {
-        let j = 0
-        while (j < sorted.length && sorted[j]! <= lo) j++
-        for (; j < sorted.length && sorted[j]! <= hi; j++) {
-          const t = (gp - sorted[j]!) / (gp - gq)
-          along[order[j]!]!.push((p[0] + t * (q[0] - p[0])) * dx + (p[1] + t * (q[1] - p[1])) * dy)
-        }
-      }
-      p = q
-      gp = gq
-    }
-  }
-  for (let k = 0; k < values.length; k++) {
-    const s = along[k]!.sort((u, v) => u - v)
-    // The foot of the perpendicular from the origin to the line a − v + b·x + c·y = 0.
-    const x0 = (-(a - values[k]!) * b) / g2
-    const y0 = (-(a - values[k]!) * c) / g2
-    const segs = out[k]!
-    for (let i = 0; i + 1 < s.length; i += 2) {
-      if (s[i + 1]! - s[i]! <= 0) continue
-      segs.push(x0 + s[i]! * dx, y0 + s[i]! * dy, x0 + s[i + 1]! * dx, y0 + s[i + 1]! * dy)
-    }
-  }
-  return out
-}
-
 /** Index (in segments, not numbers) of the longest segment of a flat segment list, or -1 when empty. */
 export function longestSegment(segments: readonly number[]): number {
   let best = -1

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import type { Ring } from '../../../shared/geometry/types'
-import { contourBands, isolinesInRings, isolineValues, lineAcrossBox, lineInRings, longestSegment, niceStep, planeGradient, sampleGrid } from '../../../shared/stress/field'
+import { contourBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, niceStep, planeGradient, sampleGrid } from '../../../shared/stress/field'
 import { cutLineProfile } from '../../../shared/stress/cutline'
 import { stressScale } from '../../../shared/stress/scale'
 import { expectClose } from '../../support/expect-close'
@@ -46,28 +46,6 @@ describe('lineInRings', () => {
 
   it('is empty when the line misses the section', () => {
     expect(lineInRings([square], -20, 1, 0)).toEqual([])
-  })
-
-  it('isolinesInRings cuts x + y = v at the outline and the hole for several v at once (hand calculation)', () => {
-    // v = 0: the diagonal through the hole; v = 15: the corner region x + y ≥ 15 is cut at (10, 5) and (5, 10); v = 25: misses.
-    const [v0, v15, v25] = isolinesInRings([square, hole], 0, 1, 1, [0, 15, 25])
-    const round = (segs: number[]) => segs.map(v => Math.round(v * 1e9) / 1e9 + 0)
-    expect(round(v15!)).toEqual([10, 5, 5, 10])
-    expect(v25).toEqual([])
-    expect(round(v0!)).toEqual([10, -10, 5, -5, -5, 5, -10, 10])
-  })
-
-  it('isolinesInRings gives, value by value, the segments of lineInRings (unsorted values, a 997-gon with a hole)', () => {
-    const ngon = Array.from({ length: 997 }, (_, i) => [100 * Math.cos((2 * Math.PI * i) / 997) + 7 * Math.sin(9 * i), 80 * Math.sin((2 * Math.PI * i) / 997)] as const)
-    const rings = [ngon, [[-20, -10], [-20, 10], [20, 10], [20, -10]] as const]
-    const values = [12.5, -30, 0, 47, -81.25, 300]
-    const all = isolinesInRings(rings, 3, 0.4, -0.9, values)
-    values.forEach((v, k) => {
-      const one = lineInRings(rings, 3 - v, 0.4, -0.9)
-      expect(all[k]!.length).toBe(one.length)
-      all[k]!.forEach((x, i) => expect(x).toBeCloseTo(one[i]!, 9))
-    })
-    expect(all[5]).toEqual([])
   })
 
   it('lineAcrossBox clips x = 3 to the box', () => {
