@@ -127,10 +127,11 @@ export function useLiveAnalysis(debounceMs = 0) {
 
   /** Starts the analysis of a change a gesture holds; settles when its answer is in (see the sketch store's stageParts). */
   function hold(next: SketchDocument): Promise<void> | null {
-    if (!analysisRequestFor(next)) return null
+    // A document with no part has no analysis to wait for (analysisRequestFor gives null).
+    if (next.parts.length === 0) return null
     return new Promise<void>(resolve => enqueue({ doc: next, revision: null, settle: resolve }))
   }
-  const app = useNuxtApp() as unknown as { _kwAnalysisHold?: Hold }
+  const app = holdRegistry()
   app._kwAnalysisHold = hold
 
   function schedule(): void {
@@ -173,6 +174,11 @@ export function useLiveAnalysis(debounceMs = 0) {
  * once) where no live analysis runs.
  */
 export function useAnalysisHold(): Hold {
-  const app = useNuxtApp() as unknown as { _kwAnalysisHold?: Hold }
+  const app = holdRegistry()
   return next => app._kwAnalysisHold?.(next) ?? null
+}
+
+/** Where the page's live analysis leaves its Hold for the canvas: the Nuxt app, one per page view. */
+function holdRegistry(): { _kwAnalysisHold?: Hold } {
+  return useNuxtApp() as unknown as { _kwAnalysisHold?: Hold }
 }
