@@ -90,7 +90,7 @@ export const useSketchStore = defineStore('sketch', () => {
     if (!s) return
     clearTimeout(s.timer)
     staged.value = null
-    commit({ kind: 'parts', label: s.label, before: doc.value.parts, after: s.after })
+    commitParts(s.label, s.after)
   }
 
   /**

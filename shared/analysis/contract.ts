@@ -48,8 +48,6 @@ export const AnalysisRequest = z.object({
   omit: z.array(z.enum(['kern', 'vertexStresses'], { error: 'omit lists "kern" and/or "vertexStresses"' })).max(2).default([]),
 })
 export type AnalysisRequestBody = z.input<typeof AnalysisRequest>
-/** What `omit` may leave out of the answer. */
-export type AnalysisOmission = z.infer<typeof AnalysisRequest>['omit'][number]
 
 /**
  * Answer of POST /api/analysis (see shared/mechanics/analyze.ts): `kern` and `stress.vertices` are
