@@ -22,6 +22,7 @@ function part(id: string, name: string, g: ShapeGeometry, mat: MaterialPreset, s
   return {
     id,
     name,
+    kind: 'solid',
     outline: translateRing(g.outline, dx, dy),
     holes: g.holes.map((h, k) => ({ id: `${id}-hole-${k + 1}`, kind: 'void' as const, ring: translateRing(h, dx, dy) })),
     material: material(mat),
@@ -66,7 +67,10 @@ function craneColumn(): SketchDocument {
   }, { show: { type: 'case', id: 'case-crane' } })
 }
 
-/** 2. Two channels toe to toe closed by plates into a box, taken at a bolt line: 22 mm holes cut through each plate. */
+/**
+ * 2. Two channels toe to toe closed by plates into a box, taken at a bolt line: four 22 mm bolt holes,
+ * each a section-wide cut through a plate and the channel flange under it (net section).
+ */
 function mezzaninePost(): SketchDocument {
   const params = { h: 200, b: 75, tw: 8.5, tf: 11.5, r: 12 }
   const ch = SHAPES.channel.build(params)
@@ -74,10 +78,17 @@ function mezzaninePost(): SketchDocument {
   // The right channel faces the other way: mirrored about its own centre, then placed.
   const mirrored: ShapeGeometry = { outline: mirrorRing(ch.outline, 'x', [0, 0]), holes: [] }
   const right = part('m1-channel-right', 'Channel right', mirrored, steel, null, 112.5, 0)
-  const bolt = (id: string, cx: number, y0: number, y1: number) => ({ id, kind: 'cut' as const, ring: translateRing(rectangleRing([-11, y0], [11, y1]), cx, 0).reverse() })
-  const top = { ...part('m1-plate-top', 'Top plate 300 × 10', rect(-150, 100, 150, 110), steel), holes: [bolt('m1-bolt-t1', -112.5, 100, 112), bolt('m1-bolt-t2', 112.5, 100, 112)] }
-  const bottom = { ...part('m1-plate-bottom', 'Bottom plate 300 × 10', rect(-150, -110, 150, -100), steel), holes: [bolt('m1-bolt-b1', -112.5, -112, -100), bolt('m1-bolt-b2', 112.5, -112, -100)] }
-  return doc([left, right, top, bottom], [{ name: 'Mezzanine beam', P: 180 * kN, x: 15, y: -10 }])
+  const top = part('m1-plate-top', 'Top plate 300 × 10', rect(-150, 100, 150, 110), steel)
+  const bottom = part('m1-plate-bottom', 'Bottom plate 300 × 10', rect(-150, -110, 150, -100), steel)
+  // Drawn a little beyond the plate and the 11.5 mm flange: a cut removes only what it overlaps.
+  const bolt = (id: string, name: string, cx: number, y0: number, y1: number): SketchPart => ({ ...part(id, name, rect(cx - 11, y0, cx + 11, y1), steel), kind: 'cut' })
+  const bolts = [
+    bolt('m1-bolt-t1', 'Bolt hole 22 top left', -112.5, 85, 115),
+    bolt('m1-bolt-t2', 'Bolt hole 22 top right', 112.5, 85, 115),
+    bolt('m1-bolt-b1', 'Bolt hole 22 bottom left', -112.5, -115, -85),
+    bolt('m1-bolt-b2', 'Bolt hole 22 bottom right', 112.5, -115, -85),
+  ]
+  return doc([left, right, top, bottom, ...bolts], [{ name: 'Mezzanine beam', P: 180 * kN, x: 15, y: -10 }])
 }
 
 /** 3. A 440 × 440 brick pier, no tension; the beam bears 90 mm off centre, outside the core (440/6 = 73 mm). */
@@ -96,7 +107,7 @@ function padFooting(): SketchDocument {
 function canopyStrut(): SketchDocument {
   const params = { h: 150, b: 90, t: 10, r: 12, r2: 6 }
   const angle = part('s5-angle', 'Angle 150 × 90 × 10', SHAPES.angle.build(params), steel, { kind: 'angle', params })
-  return doc([angle], [{ name: 'Canopy tie', P: 60 * kN, x: -40, y: 0 }], {}, { effectiveLength: 2400 })
+  return doc([angle], [{ name: 'Canopy tie', P: 60 * kN, x: -40, y: 0 }], {}, { effectiveLength: { u: 2400, v: 2400 } })
 }
 
 /** 6. A flame-cut T drawn freehand, with a 30 mm slot cut up into the stem for a gusset. */
@@ -104,7 +115,7 @@ function teeStub(): SketchDocument {
   const outline: Xy[] = [[-50, -225], [50, -225], [60, -25], [130, -25], [130, 0], [-130, 0], [-130, -25], [-60, -25]]
   const slot: Xy[] = rectangleRing([-15, -230], [15, -145]).reverse()
   const tee: SketchPart = {
-    id: 't6-stub', name: 'Flame-cut T', outline, holes: [{ id: 't6-slot', kind: 'cut', ring: slot }], material: material(steel), shape: null,
+    id: 't6-stub', name: 'Flame-cut T', kind: 'solid', outline, holes: [{ id: 't6-slot', kind: 'notch', ring: slot }], material: material(steel), shape: null,
   }
   return doc([tee], [{ name: 'Hanger', P: 120 * kN, x: 0, y: -40 }])
 }

@@ -13,7 +13,7 @@ export function withSectionErrors<T>(compute: () => T): T {
         statusCode: 422,
         statusMessage: 'Unprocessable Geometry',
         message: error.message,
-        data: { part: error.part, ring: error.ring, vertex: error.vertex },
+        data: { part: error.part, ring: error.ring, vertex: error.vertex, cut: error.cut },
       })
     }
     throw error

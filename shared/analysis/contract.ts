@@ -24,6 +24,9 @@ export const AnalysisMaterial = z.object({
   E: finite('E').refine(v => v > 0, 'E must be positive (MPa)').default(200_000),
   fy: finite('fy').refine(v => v > 0, 'fy must be positive (MPa)').optional(),
   density: finite('density').refine(v => v > 0, 'density must be positive (kg/m³)').optional(),
+  fc: finite('fc').refine(v => v > 0, 'fc must be positive (MPa)').optional(),
+  stressBlock: finite('stressBlock').refine(v => v > 0 && v <= 1, 'stressBlock lies in (0, 1]').optional(),
+  noTension: z.boolean().optional(),
 })
 
 /** Body of POST /api/analysis (mm, N, MPa; P > 0 is compression). */
@@ -32,14 +35,26 @@ export const AnalysisRequest = z.object({
     name: z.string().max(80).optional(),
     outline: RingIn,
     holes: z.array(RingIn).default([]),
+    notches: z.array(RingIn).default([]),
     material: AnalysisMaterial.default({ E: 200_000 }),
   })).min(1, 'Send at least one part').max(500, 'At most 500 parts'),
+  /** Section-wide cuts: openings through every part they overlap (a bolt hole through a flange and its cover plate). */
+  cuts: z.array(RingIn).max(500, 'At most 500 cuts').default([]),
   loads: z.array(z.object({ P: finite('P'), x: finite('x'), y: finite('y') })).max(1000).default([]),
   moments: z.object({ Mx: finite('Mx').default(0), My: finite('My').default(0) }).default({ Mx: 0, My: 0 }),
   shear: z.object({ Vx: finite('Vx').default(0), Vy: finite('Vy').default(0) }).default({ Vx: 0, Vy: 0 }),
+  /** Length tolerance (mm) within which two part edges count as one contact line for shear flow. */
+  contactTolerance: finite('contactTolerance').refine(v => v > 0 && v <= 10, 'contactTolerance lies in (0, 10] mm').optional(),
   noTension: z.boolean().default(false),
   referenceE: finite('referenceE').refine(v => v > 0, 'referenceE must be positive (MPa)').optional(),
-  effectiveLength: finite('effectiveLength').refine(v => v > 0, 'effectiveLength must be positive (mm)').optional(),
+  /** K·L (mm): one number about both principal axes, or {u, v} about the major and minor axis. */
+  effectiveLength: z.union([
+    finite('effectiveLength').refine(v => v > 0, 'effectiveLength must be positive (mm)'),
+    z.object({
+      u: finite('effectiveLength.u').refine(v => v > 0, 'effectiveLength.u must be positive (mm)').nullable().optional(),
+      v: finite('effectiveLength.v').refine(v => v > 0, 'effectiveLength.v must be positive (mm)').nullable().optional(),
+    }),
+  ], { error: 'effectiveLength is a length in mm or {u, v} in mm' }).optional(),
   /**
    * Parts of the answer the caller derives itself and need not be sent: `kern` (the core polygon,
    * `kernPolygon(properties, regionsHull(regions))`) and `vertexStresses` (`stress.vertices`, the
@@ -64,4 +79,6 @@ export interface GeometryErrorData {
   part: number | null
   ring: number | null
   vertex: number | null
+  /** The section-wide cut at fault (0-based), when the problem is a cut. */
+  cut: number | null
 }

@@ -23,24 +23,47 @@ export function shownLoading(doc: SketchDocument): { loads: { P: number; x: numb
   return { loads, Mx, My }
 }
 
-/** The POST /api/analysis body for a document (mm, N, MPa), or null when it has no part. */
+/** The parts that are material (kind 'solid'), in document order: the request's `parts`. */
+export function solidParts(doc: SketchDocument): SketchDocument['parts'] {
+  return doc.parts.filter(p => p.kind !== 'cut')
+}
+
+/** The section-wide cuts (parts of kind 'cut'), in document order: the request's `cuts`. */
+export function cutParts(doc: SketchDocument): SketchDocument['parts'] {
+  return doc.parts.filter(p => p.kind === 'cut')
+}
+
+/** The POST /api/analysis body for a document (mm, N, MPa), or null when it has no solid part. */
 export function analysisRequestFor(doc: SketchDocument): AnalysisRequestBody | null {
-  if (doc.parts.length === 0) return null
+  const solids = solidParts(doc)
+  if (solids.length === 0) return null
   const { loads, Mx, My } = shownLoading(doc)
   const s = doc.settings
+  const ring = (r: SketchDocument['parts'][number]['outline']) => r.map(q => [q[0], q[1]] as [number, number])
+  const { u, v } = s.effectiveLength
   return {
-    parts: doc.parts.map(p => ({
+    parts: solids.map(p => ({
       name: p.name,
-      outline: p.outline.map(q => [q[0], q[1]] as [number, number]),
-      holes: p.holes.map(h => h.ring.map(q => [q[0], q[1]] as [number, number])),
-      material: { name: p.material.name, E: p.material.E, fy: p.material.fy, density: p.material.density },
+      outline: ring(p.outline),
+      holes: p.holes.filter(h => h.kind !== 'notch').map(h => ring(h.ring)),
+      notches: p.holes.filter(h => h.kind === 'notch').map(h => ring(h.ring)),
+      material: {
+        name: p.material.name,
+        E: p.material.E,
+        fy: p.material.fy,
+        density: p.material.density,
+        fc: p.material.fc,
+        stressBlock: p.material.stressBlock,
+        ...(p.material.noTension ? { noTension: true } : {}),
+      },
     })),
+    cuts: cutParts(doc).map(p => ring(p.outline)),
     loads,
     moments: { Mx, My },
     shear: { Vx: s.shear.Vx, Vy: s.shear.Vy },
-    noTension: s.noTension || doc.parts.some(p => p.material.noTension === true),
+    noTension: s.noTension || solids.some(p => p.material.noTension === true),
     ...(s.referenceE ? { referenceE: s.referenceE } : {}),
-    ...(s.effectiveLength ? { effectiveLength: s.effectiveLength } : {}),
+    ...(u !== null || v !== null ? { effectiveLength: { u, v } } : {}),
   }
 }
 
@@ -51,8 +74,21 @@ export interface ErrorLocation {
   vertex: number | null
 }
 
-/** Maps the 0-based indexes of a 422 answer to the document's part id. */
+/**
+ * Maps the 0-based indexes of a 422 answer to the document: a part index counts solid parts only,
+ * a cut index the cut parts; request rings list a part's voids before its notches.
+ */
 export function locateError(doc: SketchDocument, data: Partial<GeometryErrorData> | null | undefined): ErrorLocation {
-  const part = typeof data?.part === 'number' ? doc.parts[data.part] : undefined
-  return { partId: part?.id ?? null, ring: data?.ring ?? null, vertex: data?.vertex ?? null }
+  if (typeof data?.cut === 'number') {
+    const cut = cutParts(doc)[data.cut]
+    return { partId: cut?.id ?? null, ring: 0, vertex: data.vertex ?? null }
+  }
+  const part = typeof data?.part === 'number' ? solidParts(doc)[data.part] : undefined
+  let ring = data?.ring ?? null
+  if (part && typeof ring === 'number' && ring > 0) {
+    const order = [...part.holes.map((h, k) => [h, k] as const).filter(([h]) => h.kind !== 'notch'), ...part.holes.map((h, k) => [h, k] as const).filter(([h]) => h.kind === 'notch')]
+    const hit = order[ring - 1]
+    ring = hit ? hit[1] + 1 : ring
+  }
+  return { partId: part?.id ?? null, ring, vertex: data?.vertex ?? null }
 }

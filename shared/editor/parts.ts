@@ -85,12 +85,12 @@ export const vertexOps = {
 
 /**
  * The part made hollow with wall `t` mm (makeHollow offsets the outline inwards): its voids
- * are replaced by the new inner ring(s); its cuts are kept.
+ * are replaced by the new inner ring(s); its notches are kept.
  */
 export function hollowPart(p: SketchPart, t: number): SketchPart {
   const g = makeHollow(p.outline, t)
   const voids: SketchHole[] = g.holes.map(h => ({ id: newId('hole'), kind: 'void', ring: h.map(q => [q[0], q[1]]) }))
-  return { ...p, outline: g.outline.map(q => [q[0], q[1]]), holes: [...p.holes.filter(h => h.kind === 'cut'), ...voids], shape: null }
+  return { ...p, outline: g.outline.map(q => [q[0], q[1]]), holes: [...p.holes.filter(h => h.kind === 'notch'), ...voids], shape: null }
 }
 
 /**

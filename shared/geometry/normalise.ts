@@ -14,11 +14,14 @@ const SPIKE_TOLERANCE = 1e-12
 
 /**
  * Where a ring sits in the input: 0-based part index, and ring 0 for the outline or k for hole k
- * (1-based among the part's holes). Messages show the part 1-based.
+ * (1-based among the part's holes, notches numbered after them). With `cut`, `part` is the index of a
+ * section-wide cut. `name`, when given, is shown beside the number. Messages show numbers 1-based.
  */
 export interface RingLocation {
   readonly part: number
   readonly ring: number
+  readonly cut?: boolean
+  readonly name?: string
 }
 
 /** A cleaned ring (mm, input orientation) and, for each kept vertex, its 0-based input index. */
@@ -29,7 +32,9 @@ export interface NormalisedRing {
 
 /** "Part 2, outline" or "Part 2, hole 1": the prefix of every message about a ring. */
 export function describeRing(where: RingLocation): string {
-  return `Part ${where.part + 1}, ${where.ring === 0 ? 'outline' : `hole ${where.ring}`}`
+  const named = where.name ? ` (${where.name})` : ''
+  if (where.cut) return `Cut ${where.part + 1}${named}`
+  return `Part ${where.part + 1}${named}, ${where.ring === 0 ? 'outline' : `hole ${where.ring}`}`
 }
 
 /**

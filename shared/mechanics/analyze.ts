@@ -1,23 +1,27 @@
 import type { Ring } from '../geometry/types'
-import { solveContact } from './contact'
+import { connectionShearFlows, type Connection } from './connections'
+import { contactUnderActions } from './contact'
 import { kernPolygon } from './kern'
-import { prepareSection } from './prepare'
+import { materialKey, prepareSection } from './prepare'
 import { sectionProperties } from './properties'
-import { shearFlows } from './shear'
-import { slenderness, type SlendernessResult } from './slenderness'
+import { slenderness, type EffectiveLengths, type SlendernessResult } from './slenderness'
 import { sectionStress } from './stress'
-import type { AppliedMoments, ContactResult, PartInput, PointLoad, PreparedSection, SectionProperties, ShearFlowResult, StressResult } from './types'
+import type { AppliedMoments, ContactResult, PartInput, PointLoad, PreparedCut, PreparedSection, SectionProperties, StressResult } from './types'
 
 /** Everything one analysis needs (mm, N, N·mm, MPa; P > 0 is compression). */
 export interface AnalysisInput {
   parts: readonly PartInput[]
+  /** Section-wide cuts (mm): openings through every part they overlap. */
+  cuts?: readonly Ring[]
   loads?: readonly PointLoad[]
   moments?: AppliedMoments
   shear?: { Vx: number; Vy: number }
   noTension?: boolean
   referenceE?: number
-  /** Effective length KL (mm) for the slenderness caution. */
-  effectiveLength?: number
+  /** Effective length KL (mm) about both principal axes, or per axis {u, v}, for the slenderness caution. */
+  effectiveLength?: EffectiveLengths
+  /** Edges within this distance (mm) and collinear are one contact line between parts. */
+  contactTolerance?: number
 }
 
 export interface AnalysisRegionOut {
@@ -38,7 +42,10 @@ export interface AnalysisOutput {
   regions: AnalysisRegionOut[]
   stress: StressResult | null
   contact?: ContactResult
-  shear: ShearFlowResult[]
+  /** Where parts meet, with the shear flow each connection carries for `shear` (empty for one part). */
+  connections: Connection[]
+  /** The section-wide cuts and the parts each cuts. */
+  cuts: PreparedCut[]
   slenderness: SlendernessResult | null
   vertexCount: number
   warnings: string[]
@@ -46,11 +53,11 @@ export interface AnalysisOutput {
 
 /**
  * Runs the whole section analysis: prepare (normalise, validate, Booleans), properties, core,
- * stress under the loads and moments, no-tension contact when asked, shear flow per part and the
- * slenderness caution. Throws SectionError for invalid geometry (naming part and vertex).
+ * stress under the loads and moments, no-tension contact (under the resultant of loads and moments)
+ * when asked, shear flow per connection and the slenderness caution. Throws SectionError for invalid geometry (naming part and vertex).
  */
 export function analyseSection(input: AnalysisInput): AnalysisOutput {
-  const prepared: PreparedSection = prepareSection(input.parts, { referenceE: input.referenceE })
+  const prepared: PreparedSection = prepareSection(input.parts, { referenceE: input.referenceE, cuts: input.cuts })
   const properties = sectionProperties(prepared)
   const hull = prepared.hull
   const kern = kernPolygon(properties, hull)
@@ -63,18 +70,22 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
   const stress = hasActions ? sectionStress(properties, hull, regions, loads, moments) : null
 
   let contact: ContactResult | undefined
-  if (input.noTension) {
-    if (moments.Mx !== 0 || moments.My !== 0) warnings.push('No-tension contact uses the point loads only; the applied moments are not included in it.')
-    contact = solveContact(properties, regions, hull, loads)
-  }
+  if (input.noTension) contact = contactUnderActions(properties, regions, hull, loads, moments)
 
   const Vx = input.shear?.Vx ?? 0
   const Vy = input.shear?.Vy ?? 0
-  const shear = prepared.parts.length > 1 ? shearFlows(properties, prepared.parts, Vx, Vy) : []
+  let connections: Connection[] = []
+  if (prepared.parts.length > 1) {
+    const found = connectionShearFlows(properties, prepared.parts.map(p => ({ index: p.index, name: p.name, n: p.n, materialKey: materialKey(p.material), polygons: p.polygons })), Vx, Vy, input.contactTolerance)
+    connections = found.connections
+    for (const k of found.isolated) warnings.push(`Part ${k + 1} (${prepared.parts[k]!.name}) touches no other part: the section properties assume it acts with the rest.`)
+    if (connections.some(c => c.status === 'closed-cell')) warnings.push('Some connections close a cell: their shear flow is not statically determinate and is not given.')
+  }
 
   const P = loads.reduce((s, l) => s + l.P, 0)
-  const slender = input.effectiveLength ? slenderness(properties, prepared.referenceE, input.effectiveLength, P) : null
+  const slender = input.effectiveLength !== undefined ? slenderness(properties, prepared.referenceE, input.effectiveLength, P) : null
   if (slender?.warning) warnings.push(slender.warning)
+  if (properties.moduliNote) warnings.push(properties.moduliNote)
 
   let vertexCount = 0
   for (const r of prepared.regions) for (const poly of r.polygons) for (const ring of poly) vertexCount += ring.length
@@ -91,7 +102,8 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     })),
     stress,
     contact,
-    shear,
+    connections,
+    cuts: [...prepared.cuts],
     slenderness: slender,
     vertexCount,
     warnings,

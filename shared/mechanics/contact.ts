@@ -2,8 +2,8 @@ import { clipRingHalfPlane } from '../geometry/clip'
 import { addRingMoments, ringArea, zeroMoments } from '../geometry/moments'
 import type { Moments } from '../geometry/moments'
 import type { Point, Polygon, Ring } from '../geometry/types'
-import type { ContactResult, PointLoad, StressPoint } from './types'
-import type { InertiaLike } from './stress'
+import type { AppliedMoments, ContactResult, PointLoad, StressPoint } from './types'
+import { resultantActions, type InertiaLike } from './stress'
 
 /** One material region for {@link solveContact}: n = E / E_ref (1 for a single material) and its polygons (mm). */
 export interface ContactRegion {
@@ -39,6 +39,28 @@ interface Trial {
   norm: number
   pi: number
   jac: readonly [number, number, number, number]
+}
+
+/**
+ * No-tension contact under point loads (N, compression-positive, at mm) AND applied moments (N·mm
+ * about the centroid, README "Method"): the one entry point the server and the editor both call.
+ * The actions are reduced to their resultant: P = ΣP_i at x_P = x_c - My/P, y_P = y_c - Mx/P, with
+ * Mx, My the totals (loads' moments plus applied moments, resultantActions); then solveContact.
+ * A net pull, or moments with no net compression, is overturning (no equilibrium without tension).
+ */
+export function contactUnderActions(
+  props: InertiaLike,
+  regions: readonly ContactRegion[],
+  hull: Ring,
+  loads: readonly PointLoad[],
+  moments: AppliedMoments | undefined,
+  options: ContactOptions = {},
+): ContactResult {
+  const act = resultantActions(props, loads, moments)
+  if (!(act.P > 0) || act.ex === null || act.ey === null) {
+    return overturning('The total load must be compressive (P > 0): a no-tension base cannot resist a net pull or a pure moment.')
+  }
+  return solveContact(props, regions, hull, [{ P: act.P, x: props.centroid.x + act.ex, y: props.centroid.y + act.ey }], options)
 }
 
 /** The resultant must lie this far (relative to the hull's size) inside every hull edge to count as inside. */

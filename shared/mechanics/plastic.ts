@@ -1,100 +1,184 @@
-import { addRingMoments, zeroMoments, type Moments } from '../geometry/moments'
-import type { PreparedSection } from './types'
+import type { Material, PreparedSection } from './types'
+
+/** One plastic neutral axis: offset d0 (mm) of the PNA along the axis normal, Z and Mp for either sense. */
+export interface PlasticAxis {
+  /** The PNA is the line nx·x + ny·y = offset in section coordinates (mm), n the unit normal of the axis. */
+  offset: number
+  /** Plastic moment (N·mm) with the side n·p < PNA in compression, and with it in tension; null without strengths. */
+  Mp: number | null
+  MpNeg: number | null
+  /** Plastic modulus (mm³): geometric for one material, else Mp / fy_ref ("equivalent"); null when unknown. */
+  Z: number | null
+}
 
 /**
- * Plastic section moduli (mm³) and plastic neutral axes (mm, section coordinates).
- * `basis` says what the PNA halves: 'force' when every region has fy and one region has
- * E = E_ref (each region weighted by fy / fy_ref, so the plastic moment is Mp = fy_ref·Z);
- * 'area' otherwise (each region weighted by n = E / E_ref: the transformed area; for a single
- * material this is the plain geometric Z).
+ * How the plastic values were found: 'geometric' (one material: the PNA halves the area, independent
+ * of E), 'force' (several materials: the PNA balances the yield forces, each material with its own
+ * strength), or 'unavailable' (a material lacks a strength; `note` says which).
  */
-export interface PlasticModuli {
-  /** About a horizontal PNA y = pnaY: Zx = Σ w·|∫(y - pnaY) dA|. */
-  Zx: number
-  /** About a vertical PNA x = pnaX: Zy = Σ w·|∫(x - pnaX) dA|. */
-  Zy: number
+export type PlasticMethod = 'geometric' | 'force' | 'unavailable'
+
+/**
+ * Plastic capacity of a section about x (horizontal PNA), y (vertical PNA), and the principal axes
+ * u (major, PNA parallel to u) and v (minor). Never weighted by E (README "Method", plastic).
+ */
+export interface PlasticResult {
+  method: PlasticMethod
+  note: string
+  /** fy of the reference material (MPa) that an equivalent Z refers to, or null. */
+  fyRef: number | null
+  x: PlasticAxis
+  y: PlasticAxis
+  u: PlasticAxis
+  v: PlasticAxis
+  /** y of the horizontal PNA and x of the vertical one (mm, section coordinates). */
   pnaY: number
   pnaX: number
-  basis: 'force' | 'area'
 }
 
 /** The PNA offset is converged to this fraction of the section's extent. */
 const OFFSET_TOLERANCE = 1e-12
 const MAX_ITERATIONS = 200
+/** Stress-block factor on fc when the material gives none (common practice for a rectangular block). */
+export const DEFAULT_STRESS_BLOCK = 0.85
 
 interface WeightedRing {
   /** Vertex coordinates shifted to the section's origin (mm). */
   readonly xs: Float64Array
   readonly ys: Float64Array
-  readonly weight: number
+  /** Strengths (MPa, or 1 for the geometric method) on the compressed and on the tensile side. */
+  readonly wc: number
+  readonly wt: number
+  /** Signed area and first moments Qx = ∫y, Qy = ∫x of the whole ring about the origin. */
+  readonly A: number
+  readonly Qx: number
+  readonly Qy: number
+}
+
+/** Compression and tension strengths (MPa) of a material for plastic capacity, or a reason there are none. */
+function strengths(material: Material): { c: number; t: number } | string {
+  const label = material.name ?? `E = ${material.E} MPa`
+  if (material.noTension) {
+    if (typeof material.fc !== 'number') return `${label} carries no tension and has no compression strength fc`
+    return { c: (material.stressBlock ?? DEFAULT_STRESS_BLOCK) * material.fc, t: 0 }
+  }
+  if (typeof material.fy !== 'number') return `${label} has no yield strength fy`
+  return { c: material.fy, t: material.fy }
 }
 
 /**
- * Plastic moduli Zx (horizontal PNA) and Zy (vertical PNA) of a prepared section. Each PNA is the
- * line that splits the weighted area into equal halves (see PlasticModuli.basis), found by a
- * bracketing root search on the offset (regula falsi with the Illinois step, bisection as a
- * safeguard), clipping every ring by the half-plane and converging to 1e-12 of the extent.
- * Coordinates are shifted to prepared.origin first. If the PNA falls in a gap between parts,
- * any line in the gap is equally valid and gives the same Z.
+ * Plastic neutral axes, plastic moments (N·mm) and plastic moduli (mm³) of a prepared section. One
+ * material: each PNA splits the AREA into equal halves (purely geometric, independent of E), Z is
+ * geometric and Mp = fy·Z when fy is known. Several materials: each PNA balances the yield forces
+ * ∫ f dA (steel-like f = fy both sides; a no-tension material f = stressBlock·fc in compression, 0 in
+ * tension), Mp = Σ|∫ f·d dA| for both senses, and Z = Mp / fy_ref as the equivalent for the reference
+ * material (E = E_ref). The offsets come from a bracketing root search (regula falsi, Illinois step,
+ * bisection safeguard) clipping every ring by the half-plane, to 1e-12 of the extent.
  */
-export function plasticModuli(prepared: PreparedSection): PlasticModuli {
+export function plasticModuli(prepared: PreparedSection, theta = 0): PlasticResult {
   const { regions, referenceE, origin, bounds } = prepared
-  const reference = regions.find((region) => region.material.E === referenceE)
-  const hasFy = (fy: number | undefined): fy is number => typeof fy === 'number'
-  const byForce = hasFy(reference?.material.fy) && regions.every((region) => hasFy(region.material.fy))
+  const single = regions.length === 1
+  const reasons: string[] = []
   const rings: WeightedRing[] = []
-  const whole = zeroMoments()
   for (const region of regions) {
-    const weight = byForce ? region.material.fy! / reference!.material.fy! : region.n
-    for (const polygon of region.polygons) {
-      for (const ring of polygon) {
-        const xs = new Float64Array(ring.length)
-        const ys = new Float64Array(ring.length)
-        ring.forEach((p, i) => {
-          xs[i] = p[0] - origin[0]
-          ys[i] = p[1] - origin[1]
-        })
-        rings.push({ xs, ys, weight })
-        addRingMoments(whole, ring, origin, weight)
+    const f = strengths(region.material)
+    if (typeof f === 'string') reasons.push(f)
+    const [wc, wt] = single ? [1, 1] : typeof f === 'string' ? [1, 1] : [f.c, f.t]
+    for (const polygon of region.polygons) for (const ring of polygon) rings.push(weighted(ring, origin, wc, wt))
+  }
+  const reference = regions.find((region) => region.material.E === referenceE) ?? regions[0]!
+  const fyRef = typeof reference.material.fy === 'number' && !reference.material.noTension ? reference.material.fy : null
+  const method: PlasticMethod = single ? 'geometric' : reasons.length > 0 ? 'unavailable' : 'force'
+  const xc = origin[0]
+  const yc = origin[1]
+  const ext = Math.max(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY)
+  const axis = (nx: number, ny: number): { t: number; result: PlasticAxis } => {
+    const found = plasticAxis(rings, nx, ny, ext)
+    const { Mp, MpNeg } = found
+    const t = found.t + nx * xc + ny * yc
+    const fy = typeof regions[0]!.material.fy === 'number' && !regions[0]!.material.noTension ? regions[0]!.material.fy : null
+    if (method === 'geometric') return { t, result: { offset: t, Mp: fy === null ? null : fy * Mp, MpNeg: fy === null ? null : fy * MpNeg, Z: Mp } }
+    if (method === 'unavailable') return { t, result: { offset: t, Mp: null, MpNeg: null, Z: null } }
+    return { t, result: { offset: t, Mp, MpNeg, Z: fyRef === null ? null : Math.min(Mp, MpNeg) / fyRef } }
+  }
+  const x = axis(0, 1)
+  const y = axis(1, 0)
+  // About the principal axes: the normal of u is (-sin θ, cos θ); of v, (cos θ, sin θ). When θ = 0 they are x and y.
+  const rad = (theta * Math.PI) / 180
+  const aligned = theta === 0
+  const u = aligned ? x : axis(-Math.sin(rad), Math.cos(rad))
+  const v = aligned ? y : axis(Math.cos(rad), Math.sin(rad))
+  const note = method === 'geometric'
+    ? 'One material: the plastic neutral axes halve the area (geometric, independent of E).'
+    : method === 'force'
+      ? `Several materials: the plastic neutral axes balance the yield forces of each material; Z is equivalent, for fy of the reference material${fyRef === null ? ' (which has none, so Z is not given)' : ` (${fyRef} MPa)`}.`
+      : `Plastic capacity needs a strength for every material: ${reasons.join('; ')}.`
+  return { method, note, fyRef, x: x.result, y: y.result, u: u.result, v: v.result, pnaY: x.t, pnaX: y.t }
+}
+
+function weighted(ring: readonly (readonly [number, number])[], origin: readonly [number, number], wc: number, wt: number): WeightedRing {
+  const n = ring.length
+  const xs = new Float64Array(n)
+  const ys = new Float64Array(n)
+  for (let i = 0; i < n; i++) {
+    xs[i] = ring[i]![0] - origin[0]
+    ys[i] = ring[i]![1] - origin[1]
+  }
+  let A = 0
+  let Qx = 0
+  let Qy = 0
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const cross = xs[j]! * ys[i]! - xs[i]! * ys[j]!
+    A += cross
+    Qx += (ys[j]! + ys[i]!) * cross
+    Qy += (xs[j]! + xs[i]!) * cross
+  }
+  return { xs, ys, wc, wt, A: A / 2, Qx: Qx / 6, Qy: Qy / 6 }
+}
+
+/**
+ * The PNA normal to (nx, ny) (unit): the offset t (shifted coordinates, mm) at which the side d < t,
+ * d = nx·x + ny·y, in compression balances the other side in tension, Σ (wc + wt)·A_below = Σ wt·A;
+ * Mp = Σ wc·(t·A_b - Q_b) + Σ wt·((Q - Q_b) - t·(A - A_b)) there, and MpNeg likewise with the sides'
+ * strengths swapped (the same when every material is equally strong both ways).
+ */
+function plasticAxis(rings: readonly WeightedRing[], nx: number, ny: number, extent: number): { t: number; Mp: number; MpNeg: number } {
+  const side = new Float64Array(3) // [A, Qx, Qy] of one clipped ring
+  const solve = (swap: boolean): { t: number; Mp: number } => {
+    let total = 0
+    let low = Infinity
+    let high = -Infinity
+    for (const r of rings) {
+      total += (swap ? r.wc : r.wt) * r.A
+      for (let i = 0; i < r.xs.length; i++) {
+        const d = nx * r.xs[i]! + ny * r.ys[i]!
+        if (d < low) low = d
+        if (d > high) high = d
       }
     }
-  }
-  // Half-plane t + b·x + c·y >= 0 with (b, c) = (0, -1) is y <= t; with (-1, 0) it is x <= t.
-  const alongY = plasticAxis(rings, whole, 0, -1, bounds.minY - origin[1], bounds.maxY - origin[1])
-  const alongX = plasticAxis(rings, whole, -1, 0, bounds.minX - origin[0], bounds.maxX - origin[0])
-  return {
-    Zx: alongY.Z,
-    Zy: alongX.Z,
-    pnaY: origin[1] + alongY.offset,
-    pnaX: origin[0] + alongX.offset,
-    basis: byForce ? 'force' : 'area',
-  }
-}
-
-/**
- * The offset t (shifted coordinates, mm) at which the half-plane t + b·x + c·y >= 0 (the side
- * below or left of the PNA) holds half the weighted area, and Z = Q_above - Q_below about the PNA,
- * taken as Q_all - 2·Q_below with `whole` the weighted moments of the whole section.
- */
-function plasticAxis(rings: readonly WeightedRing[], whole: Moments, b: number, c: number, low: number, high: number): { offset: number; Z: number } {
-  const alongY = b === 0
-  const side = new Float64Array(2) // [A, Q] of one clipped ring
-  const below = (t: number): { A: number; Q: number } => {
-    let A = 0
-    let Q = 0
-    for (const { xs, ys, weight } of rings) {
-      clippedMoments(xs, ys, t, b, c, alongY, side)
-      A += weight * side[0]!
-      Q += weight * side[1]!
+    const balance = (t: number): number => {
+      let s = 0
+      for (const r of rings) {
+        clippedMoments(r.xs, r.ys, t, -nx, -ny, side)
+        s += (r.wc + r.wt) * side[0]!
+      }
+      return s - total
     }
-    return { A, Q }
+    const t = bracketedRoot(balance, low, high, -total, (rings.reduce((s, r) => s + (r.wc + r.wt) * r.A, 0)) - total, OFFSET_TOLERANCE * extent)
+    let Mp = 0
+    for (const r of rings) {
+      clippedMoments(r.xs, r.ys, t, -nx, -ny, side)
+      const Ab = side[0]!
+      const Qb = nx * side[2]! + ny * side[1]!
+      const Q = nx * r.Qy + ny * r.Qx
+      const [wc, wt] = swap ? [r.wt, r.wc] : [r.wc, r.wt]
+      Mp += wc * (t * Ab - Qb) + wt * (Q - Qb - t * (r.A - Ab))
+    }
+    return { t, Mp }
   }
-  const total = whole.A
-  const offset = bracketedRoot((t) => below(t).A - total / 2, low, high, -total / 2, total / 2, OFFSET_TOLERANCE * (high - low))
-  const part = below(offset)
-  const Qall = (alongY ? whole.Qx : whole.Qy) - total * offset
-  const Z = Qall - 2 * (part.Q - part.A * offset)
-  return { offset, Z }
+  const pos = solve(false)
+  const symmetric = rings.every((r) => r.wc === r.wt)
+  return { t: pos.t, Mp: pos.Mp, MpNeg: symmetric ? pos.Mp : solve(true).Mp }
 }
 
 /**
@@ -132,12 +216,12 @@ function bracketedRoot(f: (t: number) => number, low: number, high: number, fLow
 }
 
 /**
- * Writes into out the signed area A (mm²) and first moment Q (mm³; ∫y dA if alongY, else ∫x dA,
- * about the shifted origin) of the ring (xs, ys) clipped by a + b·x + c·y >= 0. It is the Sutherland–Hodgman
+ * Writes into out the signed area A (mm²) and the first moments Qx = ∫y dA, Qy = ∫x dA (mm³, about
+ * the shifted origin) of the ring (xs, ys) clipped by a + b·x + c·y >= 0. It is the Sutherland–Hodgman
  * walk of clipRingHalfPlane with Green's-theorem sums taken as the output is produced, not stored:
  * the root search calls it many times on rings of up to millions of vertices.
  */
-function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number, c: number, alongY: boolean, out: Float64Array): void {
+function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number, c: number, out: Float64Array): void {
   const n = xs.length
   let area = 0
   let momentX = 0
@@ -187,5 +271,6 @@ function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number
     momentY += (lastX + firstX) * cross
   }
   out[0] = area / 2
-  out[1] = (alongY ? momentX : momentY) / 6
+  out[1] = momentX / 6
+  out[2] = momentY / 6
 }

@@ -1,6 +1,5 @@
 import { ringsBounds } from '../geometry/bounds'
-import polygonClipping from 'polygon-clipping'
-import type { MultiPolygon as ClipMultiPolygon, Polygon as ClipPolygon } from 'polygon-clipping'
+import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { regionsHull } from '../geometry/hull'
 import { findRingsIntersection, type RingsIntersection } from '../geometry/intersections'
 import { ringArea } from '../geometry/moments'
@@ -9,9 +8,13 @@ import type { Bounds, Point, Polygon, Ring } from '../geometry/types'
 import { DEFAULT_MATERIAL, SectionError } from './types'
 import type { Material, PartInput, PreparedPart, PreparedRegion, PreparedSection } from './types'
 
-/** Options of prepareSection: the reference modulus E_ref (MPa) for the modular ratios n = E / E_ref. */
+/**
+ * Options of prepareSection: the reference modulus E_ref (MPa) for the modular ratios n = E / E_ref,
+ * and the section-wide cuts (rings, mm): openings through every part they overlap.
+ */
 export interface PrepareOptions {
   readonly referenceE?: number
+  readonly cuts?: readonly Ring[]
 }
 
 /** Overlaps below this fraction of the smaller area are rounding, not material. */
@@ -19,7 +22,9 @@ const OVERLAP_TOLERANCE = 1e-6
 
 /** One part after its rings were cleaned: outline CCW, holes CW (mm). */
 interface CleanPart {
+  readonly name: string
   readonly outline: Point[]
+  /** Its voids then its notches, CW. */
   readonly holes: Point[][]
   readonly material: Material
   /** True when the holes lie strictly inside the outline and apart: no Boolean needed. */
@@ -28,11 +33,12 @@ interface CleanPart {
 
 /**
  * Validates and prepares a section for integration (mm, MPa). Rings are cleaned and oriented
- * (outlines CCW, holes CW, no closing vertex); a hole cuts every part it overlaps, except a part
- * lying wholly inside it, which fills it (a core in a tube); parts of one material (same E, fy,
- * density) are unioned so overlaps count once; parts of different materials must not overlap.
+ * (outlines CCW, holes CW, no closing vertex). A part's holes and notches cut that part only: a
+ * plate drawn inside a box's void counts in full. Section-wide cuts (options.cuts) cut every part
+ * they overlap and are listed per part. Parts of one material (same E, fy, density) are then
+ * unioned so overlaps count once; parts of different materials must not overlap.
  * n = E / E_ref with E_ref = options.referenceE or the first part's E. Throws SectionError,
- * naming the part (1-based in the text, 0-based in `part`), ring and vertex, for invalid input.
+ * naming the part or cut (1-based in the text, 0-based in the error), ring and vertex, for invalid input.
  */
 export function prepareSection(parts: readonly PartInput[], options: PrepareOptions = {}): PreparedSection {
   if (!Array.isArray(parts) || parts.length === 0) {
@@ -44,12 +50,17 @@ export function prepareSection(parts: readonly PartInput[], options: PrepareOpti
   if (typeof referenceE !== 'number' || !Number.isFinite(referenceE) || referenceE <= 0) {
     throw new SectionError(`The reference modulus E_ref must be a positive number of MPa (got ${String(referenceE)}).`)
   }
-  const nets = clean.map((part, j) => netPolygons(part, j, clean, warnings))
+  const cuts = (options.cuts ?? []).map((ring, k) => cleanCut(ring, k))
+  const cutHits: { parts: number[]; area: number }[] = cuts.map(() => ({ parts: [], area: 0 }))
+  const nets = clean.map((part, j) => netPolygons(part, j, cuts, cutHits))
+  cutHits.forEach((hit, k) => {
+    if (hit.parts.length === 0) warnings.push(`Cut ${k + 1} overlaps no part and removes nothing.`)
+  })
   if (nets.every((net) => net.length === 0)) {
-    throw new SectionError('Nothing is left of the section once its holes are cut.')
+    throw new SectionError('Nothing is left of the section once its holes and cuts are taken away.')
   }
   nets.forEach((net, j) => {
-    if (net.length === 0) warnings.push(`Part ${j + 1} is cut away entirely by holes of other parts.`)
+    if (net.length === 0) warnings.push(`${partLabel(clean[j]!, j)} is cut away entirely.`)
   })
   checkMaterialOverlaps(clean, nets)
 
@@ -70,10 +81,11 @@ export function prepareSection(parts: readonly PartInput[], options: PrepareOpti
   const bounds = ringsBounds(outlines)!
   const preparedParts: PreparedPart[] = clean.map((part, j) => ({
     index: j,
-    name: parts[j]!.name ?? `Part ${j + 1}`,
+    name: part.name,
     material: part.material,
     n: part.material.E / referenceE,
     polygons: nets[j]!,
+    cuts: cutHits.flatMap((hit, k) => (hit.parts.includes(j) ? [k] : [])),
   }))
   return {
     regions,
@@ -82,22 +94,33 @@ export function prepareSection(parts: readonly PartInput[], options: PrepareOpti
     bounds,
     hull: regionsHull(regions),
     parts: preparedParts,
+    cuts: cutHits.map((hit, k) => ({ index: k, parts: hit.parts, area: hit.area })),
     warnings,
   }
+}
+
+/** "Part 2 (Top plate)": how messages name a part. */
+function partLabel(part: CleanPart, i: number): string {
+  return part.name === `Part ${i + 1}` ? part.name : `Part ${i + 1} (${part.name})`
 }
 
 /** Checks the material and cleans the rings of part i; decides whether its holes need Booleans. */
 function cleanPart(part: PartInput, i: number, warnings: string[]): CleanPart {
   const material = checkMaterial(part?.material ?? DEFAULT_MATERIAL, i)
-  const rings = [part?.outline, ...(part?.holes ?? [])].map((ring, k) => normaliseRing(ring as Ring, { part: i, ring: k }))
+  const named = typeof part?.name === 'string' && part.name.trim() !== '' ? part.name : undefined
+  const name = named ?? `Part ${i + 1}`
+  const voids = part?.holes ?? []
+  const given = [part?.outline, ...voids, ...(part?.notches ?? [])]
+  const at = (k: number): RingLocation => ({ part: i, ring: k, ...(named ? { name: named } : {}) })
+  const rings = given.map((ring, k) => normaliseRing(ring as Ring, at(k)))
   // One sweep over all rings; only if it finds contact are the rings swept one by one, to tell a
   // ring crossing itself (an error) from holes touching the outline or each other (Booleans).
   const contact = findRingsIntersection(rings.map((ring) => ring.points))
-  if (contact && contact.ringA === contact.ringB) throw crossingError(rings[contact.ringA]!, contact, { part: i, ring: contact.ringA })
+  if (contact && contact.ringA === contact.ringB) throw crossingError(rings[contact.ringA]!, contact, at(contact.ringA))
   if (contact && rings.length > 1) {
     rings.forEach((ring, k) => {
       const own = findRingsIntersection([ring.points])
-      if (own) throw crossingError(ring, own, { part: i, ring: k })
+      if (own) throw crossingError(ring, own, at(k))
     })
   }
   const outline = orientRing(rings[0]!.points, true)
@@ -105,29 +128,39 @@ function cleanPart(part: PartInput, i: number, warnings: string[]): CleanPart {
   // No contact between the rings: each hole is wholly inside the outline, outside it, or around it.
   let simple = contact === null
   holes.forEach((hole, k) => {
-    const where = { part: i, ring: k + 1 }
+    const where = at(k + 1)
     const holeArea = -ringArea(hole)
     const cut = simple ? (pointInRing(hole[0]!, outline) ? holeArea : 0) : overlapArea([[outline]], [[hole]])
     if (cut <= OVERLAP_TOLERANCE * holeArea) {
       const around = simple && pointInRing(outline[0]!, hole)
+      const vertex = rings[k + 1]!.source[0]!
       throw new SectionError(around
         ? `${describeRing(where)} covers the whole outline of the part.`
-        : `${describeRing(where)} lies outside the part's outline; draw it inside the outline it cuts.`, where)
+        : `${describeRing(where)} lies outside the part's outline (from its vertex ${vertex + 1} on); draw it inside the outline it cuts.`, { ...where, vertex })
     }
-    if (cut < holeArea * (1 - OVERLAP_TOLERANCE)) {
-      warnings.push(`${describeRing(where)} extends beyond the part's outline; it is treated as a cut at the edge.`)
+    if (k < voids.length && cut < holeArea * (1 - OVERLAP_TOLERANCE)) {
+      warnings.push(`${describeRing(where)} extends beyond the part's outline; it cuts the edge as a notch (mark it a notch if that is meant).`)
     }
   })
   // Apart is not enough when one hole lies inside another.
   for (let a = 0; simple && a < holes.length; a++) {
     for (let b = 0; b < holes.length; b++) {
       if (a !== b && pointInRing(holes[a]![0]!, holes[b]!)) {
-        warnings.push(`${describeRing({ part: i, ring: a + 1 })} lies inside hole ${b + 1} and cuts nothing more.`)
+        warnings.push(`${describeRing(at(a + 1))} lies inside hole ${b + 1} and cuts nothing more.`)
         simple = false
       }
     }
   }
-  return { outline, holes, material, simple }
+  return { name, outline, holes, material, simple }
+}
+
+/** Cleans section-wide cut k: a simple ring, returned clockwise (mm). */
+function cleanCut(ring: Ring, k: number): Point[] {
+  const where: RingLocation = { part: k, ring: 0, cut: true }
+  const cleaned = normaliseRing(ring, where)
+  const own = findRingsIntersection([cleaned.points])
+  if (own) throw crossingError(cleaned, own, where)
+  return orientRing(cleaned.points, false)
 }
 
 /** The error for a ring that crosses or touches itself, naming the edges by input vertex numbers. */
@@ -158,31 +191,38 @@ function checkMaterial(material: Material, i: number): Material {
 }
 
 /**
- * The net polygons of part j: its outline minus its own holes and every other part's hole that
- * overlaps it, unless the part lies wholly inside that hole (it fills it).
+ * The net polygons of part j: its outline minus its own holes and every section-wide cut that
+ * overlaps it. Records in cutHits which cut took how much (mm²) from which part.
  */
-function netPolygons(part: CleanPart, j: number, all: readonly CleanPart[], warnings: string[]): Polygon[] {
-  const foreign: Point[][] = []
+function netPolygons(part: CleanPart, j: number, cuts: readonly Point[][], cutHits: { parts: number[]; area: number }[]): Polygon[] {
+  const applied: Point[][] = []
   const partArea = ringArea(part.outline)
   let box: Bounds | null = null
-  all.forEach((other, i) => {
-    if (i === j) return
-    other.holes.forEach((hole, k) => {
-      box ??= ringsBounds([part.outline])!
-      if (!boxesOverlap(ringsBounds([hole])!, box)) return
-      const holeArea = -ringArea(hole)
-      let cut: number
-      if (findRingsIntersection([part.outline, hole]) !== null) cut = overlapArea([[part.outline]], [[hole]])
-      else if (pointInRing(hole[0]!, part.outline)) cut = holeArea
-      else cut = pointInRing(part.outline[0]!, hole) ? partArea : 0
-      if (cut <= OVERLAP_TOLERANCE * Math.min(partArea, holeArea)) return
-      if (cut >= partArea * (1 - OVERLAP_TOLERANCE)) return // the part fills the hole
-      foreign.push(hole)
-      warnings.push(`${describeRing({ part: i, ring: k + 1 })} also cuts part ${j + 1}.`)
-    })
+  cuts.forEach((cutRing, k) => {
+    box ??= ringsBounds([part.outline])!
+    if (!boxesOverlap(ringsBounds([cutRing])!, box)) return
+    const cutArea = -ringArea(cutRing)
+    let cut: number
+    if (findRingsIntersection([part.outline, cutRing]) !== null) cut = overlapArea([[part.outline]], [[cutRing]])
+    else if (pointInRing(cutRing[0]!, part.outline)) cut = cutArea
+    else cut = pointInRing(part.outline[0]!, cutRing) ? partArea : 0
+    if (cut <= OVERLAP_TOLERANCE * Math.min(partArea, cutArea)) return
+    applied.push(cutRing)
+    cutHits[k]!.parts.push(j)
   })
-  if (part.simple && foreign.length === 0) return [[part.outline, ...part.holes]]
-  return boolean('difference', [[[part.outline]], ...[...part.holes, ...foreign].map((hole) => [[hole]])])
+  if (part.simple && applied.length === 0) return [[part.outline, ...part.holes]]
+  const own = part.simple ? [[part.outline, ...part.holes]] : boolean('difference', [[[part.outline]], ...part.holes.map((hole) => [[hole]])])
+  if (applied.length === 0) return own
+  const net = boolean('difference', [own, ...applied.map((ring) => [[ring]])])
+  // What each cut removed from this part: the net area before and after, cut by cut when several.
+  let before = netArea(own)
+  applied.forEach((ring, a) => {
+    const k = cuts.indexOf(ring)
+    const after = applied.length === 1 ? netArea(net) : netArea(boolean('difference', [own, ...applied.slice(0, a + 1).map((r) => [[r]])]))
+    cutHits[k]!.area += before - after
+    before = after
+  })
+  return net
 }
 
 /** Parts of different materials must not share area (a transformed section has one n per point). */
@@ -198,7 +238,7 @@ function checkMaterialOverlaps(clean: readonly CleanPart[], nets: readonly Polyg
       const overlap = overlapArea(nets[i]!, nets[j]!)
       if (overlap > OVERLAP_TOLERANCE * Math.min(netArea(nets[i]!), netArea(nets[j]!))) {
         throw new SectionError(
-          `Parts ${i + 1} and ${j + 1} overlap (${round(overlap)} mm²) but are of different materials; cut a hole in one where the other sits.`,
+          `${partLabel(clean[i]!, i)} and ${partLabel(clean[j]!, j)} overlap (${round(overlap)} mm²) but are of different materials; cut a hole in one where the other sits.`,
           { part: i },
         )
       }
@@ -206,40 +246,13 @@ function checkMaterialOverlaps(clean: readonly CleanPart[], nets: readonly Polyg
   }
 }
 
-type BooleanOperation = 'union' | 'difference' | 'intersection'
-
-/** A polygon-clipping operation on our polygons (open rings), returning CCW outlines and CW holes. */
-function boolean(operation: BooleanOperation, geoms: readonly (readonly Polygon[])[]): Polygon[] {
-  const [first, ...rest] = geoms.map((geom) => geom.map(toClip))
-  let result: ClipMultiPolygon
-  try {
-    result = polygonClipping[operation](first!, ...rest)
-  } catch (error) {
-    throw new SectionError(`The ${operation} of the section's parts failed (${(error as Error).message}); simplify the drawing.`)
-  }
-  return result.map(fromClip).filter((polygon) => polygon.length > 0)
-}
-
-function toClip(polygon: Polygon): ClipPolygon {
-  return polygon.map((ring) => [...ring.map((p): [number, number] => [p[0], p[1]]), [ring[0]![0], ring[0]![1]]])
-}
-
-/** Drops the closing vertex and re-orients; drops holes that enclose nothing ([] if the outline does not). */
-function fromClip(polygon: ClipPolygon): Polygon {
-  const rings = polygon.map((ring) => ring.slice(0, ring.length - 1) as Point[])
-  const valid = (ring: Point[]): boolean => ring.length >= 3 && ringArea(ring) !== 0
-  if (!rings[0] || !valid(rings[0])) return []
-  return [orientRing(rings[0], true), ...rings.slice(1).filter(valid).map((ring) => orientRing(ring, false))]
-}
-
 /** Area (mm²) of the intersection of two sets of polygons. */
 function overlapArea(a: readonly Polygon[], b: readonly Polygon[]): number {
   return netArea(boolean('intersection', [a, b]))
 }
 
-function netArea(polygons: readonly Polygon[]): number {
-  return polygons.reduce((sum, polygon) => sum + polygon.reduce((s, ring) => s + ringArea(ring), 0), 0)
-}
+const netArea = polygonsArea
+const boolean = polygonBoolean
 
 /** Crossing-number test: whether p lies inside the ring (p must not lie on its boundary). */
 function pointInRing(p: Point, ring: Ring): boolean {
@@ -253,8 +266,9 @@ function pointInRing(p: Point, ring: Ring): boolean {
   return inside
 }
 
-function materialKey(material: Material): string {
-  return `${material.E}|${material.fy ?? ''}|${material.density ?? ''}`
+/** Parts with equal keys are one material (same E, fy, density, strengths): their overlaps count once. */
+export function materialKey(material: Material): string {
+  return `${material.E}|${material.fy ?? ''}|${material.density ?? ''}|${material.fc ?? ''}|${material.stressBlock ?? ''}|${material.noTension ? 'nt' : ''}`
 }
 
 

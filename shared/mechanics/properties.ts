@@ -1,6 +1,6 @@
 import { polygonMoments, zeroMoments } from '../geometry/moments'
-import type { Ring } from '../geometry/types'
-import { plasticModuli } from './plastic'
+import type { Bounds, Ring } from '../geometry/types'
+import { plasticModuli, type PlasticResult } from './plastic'
 import { SectionError } from './types'
 import type { PreparedSection, SectionProperties } from './types'
 
@@ -13,9 +13,9 @@ const ISOTROPY_TOLERANCE = 1e-12
  * centroid. Ixy = ∫xy dA (positive when material lies in the first and third quadrants).
  * theta (degrees, in (-90, 90], counter-clockwise from +x) is the direction of the major axis,
  * the axis about which the second moment is I1 = max: theta = 1/2·atan2(-2·Ixy, Ixx - Iyy);
- * 0 when I1 = I2. Area, I and S are equivalent (transformed) values when `equivalent`; Z and the
- * PNAs come from plasticModuli (yield-force halves when every region has fy, else transformed
- * area halves). massPerMetre uses the real area of each region. The perimeter sums every ring of
+ * 0 when I1 = I2. Area, I and S are equivalent (transformed) values when `equivalent`; Su, Sv are
+ * the moduli about the principal axes to each side; Z, Mp and the PNAs come from plasticModuli
+ * (area halves for one material, yield-force balance for several: never weighted by E). massPerMetre uses the real area of each region. The perimeter sums every ring of
  * every region, so an interface between two materials counts once per side. Throws SectionError
  * if the area is not positive.
  */
@@ -48,7 +48,7 @@ export function sectionProperties(prepared: PreparedSection): SectionProperties 
   const theta = radius <= ISOTROPY_TOLERANCE * mean ? 0 : principalAngle(Ixx, Iyy, Ixy)
   const x = origin[0] + xLocal
   const y = origin[1] + yLocal
-  const plastic = plasticModuli(prepared)
+  const plastic = plasticModuli(prepared, theta)
   const gyration = (I: number): number => Math.sqrt(Math.max(I, 0) / A)
   return {
     area: A,
@@ -69,8 +69,14 @@ export function sectionProperties(prepared: PreparedSection): SectionProperties 
       left: Iyy / (x - bounds.minX),
       right: Iyy / (bounds.maxX - x),
     },
-    Z: { x: plastic.Zx, y: plastic.Zy },
+    ...principalModuli(prepared.hull, x, y, theta, I1, I2),
+    Z: { x: plastic.x.Z, y: plastic.y.Z, u: plastic.u.Z, v: plastic.v.Z },
     pna: { y: plastic.pnaY, x: plastic.pnaX },
+    plastic,
+    shapeFactor: shapeFactors(plastic, Ixx, Iyy, bounds, x, y),
+    moduliNote: Math.abs(Ixy) > PRODUCT_TOLERANCE * Math.sqrt(Ixx * Iyy)
+      ? 'Ixy ≠ 0: M/S about x or y is not the extreme stress of this unsymmetric section; use the principal moduli Su, Sv or the stress view.'
+      : null,
     Ip: Ixx + Iyy,
     bounds,
     perimeter,
@@ -78,6 +84,43 @@ export function sectionProperties(prepared: PreparedSection): SectionProperties 
     equivalent: new Set(regions.map((region) => region.material.E)).size > 1 || regions.some((region) => region.n !== 1),
     referenceE,
   }
+}
+
+/** |Ixy| below this fraction of sqrt(Ixx·Iyy) is round-off: the x and y moduli are then the extreme ones. */
+const PRODUCT_TOLERANCE = 1e-9
+
+/**
+ * Elastic moduli about the principal axes (mm³) to the extreme fibre on each side: Su = I1 / v_max
+ * with v = -sin θ·(x - x_c) + cos θ·(y - y_c) the distance from the major axis u (pos: v > 0 side),
+ * Sv = I2 / u_max with u = cos θ·(x - x_c) + sin θ·(y - y_c). The extremes lie on the convex hull.
+ */
+function principalModuli(hull: Ring, xc: number, yc: number, theta: number, I1: number, I2: number): Pick<SectionProperties, 'Su' | 'Sv'> {
+  const t = (theta * Math.PI) / 180
+  const c = Math.cos(t)
+  const s = Math.sin(t)
+  let uMin = 0
+  let uMax = 0
+  let vMin = 0
+  let vMax = 0
+  for (const p of hull) {
+    const dx = p[0] - xc
+    const dy = p[1] - yc
+    const u = c * dx + s * dy
+    const v = -s * dx + c * dy
+    if (u < uMin) uMin = u
+    if (u > uMax) uMax = u
+    if (v < vMin) vMin = v
+    if (v > vMax) vMax = v
+  }
+  return { Su: { pos: I1 / vMax, neg: I1 / -vMin }, Sv: { pos: I2 / uMax, neg: I2 / -uMin } }
+}
+
+/** Shape factors Z / S_min about x and y (-) for one material; null when Z is equivalent or unknown. */
+function shapeFactors(plastic: PlasticResult, Ixx: number, Iyy: number, bounds: Bounds, x: number, y: number): { x: number | null; y: number | null } {
+  if (plastic.method !== 'geometric') return { x: null, y: null }
+  const Sx = Ixx / Math.max(bounds.maxY - y, y - bounds.minY)
+  const Sy = Iyy / Math.max(bounds.maxX - x, x - bounds.minX)
+  return { x: plastic.x.Z === null ? null : plastic.x.Z / Sx, y: plastic.y.Z === null ? null : plastic.y.Z / Sy }
 }
 
 /** Major-axis angle in degrees, (-90, 90], counter-clockwise from +x (notes section 4). */

@@ -1,4 +1,5 @@
 import type { Bounds, Line, Point, Polygon, Ring } from '../geometry/types'
+import type { PlasticResult } from './plastic'
 
 /** A material: E and fy in MPa, density in kg/m³. */
 export interface Material {
@@ -6,16 +7,27 @@ export interface Material {
   readonly E: number
   readonly fy?: number
   readonly density?: number
+  /** Compression strength (MPa) of a concrete-like material, used with `stressBlock` in plastic capacity. */
+  readonly fc?: number
+  /** Stress-block factor on fc (-), 0.85 when not given (common practice). */
+  readonly stressBlock?: number
+  /** A material that carries no tension (masonry, plain concrete, soil). */
+  readonly noTension?: boolean
 }
 
 /** Default material: structural steel, E = 200 000 MPa (common practice). */
 export const DEFAULT_MATERIAL: Material = { name: 'Steel', E: 200_000, fy: 355, density: 7850 }
 
-/** One part of a section as drawn: an outline, optional holes (voids or cuts), a material. */
+/**
+ * One part of a section as drawn: an outline, its own holes and a material. `holes` are voids
+ * inside the outline; `notches` are openings meant to cross its edge (a slot, a cope). Both cut
+ * this part only; an opening through several parts is a section-wide cut (PrepareOptions.cuts).
+ */
 export interface PartInput {
   readonly name?: string
   readonly outline: Ring
   readonly holes?: readonly Ring[]
+  readonly notches?: readonly Ring[]
   readonly material?: Material
 }
 
@@ -46,7 +58,15 @@ export interface PreparedSection {
   readonly hull: Ring
   /** Per input part, its own net polygons (after its holes and any section-wide cut), for shear flow. */
   readonly parts: readonly PreparedPart[]
+  /** Per section-wide cut, the parts it cuts (0-based) and the area it removes (mm², real). */
+  readonly cuts: readonly PreparedCut[]
   readonly warnings: readonly string[]
+}
+
+export interface PreparedCut {
+  readonly index: number
+  readonly parts: readonly number[]
+  readonly area: number
 }
 
 export interface PreparedRegion {
@@ -61,6 +81,8 @@ export interface PreparedPart {
   readonly material: Material
   readonly n: number
   readonly polygons: readonly Polygon[]
+  /** The section-wide cuts (0-based) that cut this part. */
+  readonly cuts: readonly number[]
 }
 
 /** Properties of a section (mm, mm², mm⁴...). Equivalent (transformed) when several materials. */
@@ -81,9 +103,25 @@ export interface SectionProperties {
   r2: number
   /** Elastic section moduli to the extreme fibres (mm³). */
   S: { top: number; bottom: number; left: number; right: number }
-  /** Plastic section moduli (mm³) and the plastic neutral axes: y of the PNA for Zx, x for Zy. */
-  Z: { x: number; y: number }
+  /**
+   * Elastic moduli about the principal axes u (major) and v (minor) to the extreme fibre on each
+   * side (mm³): pos on the +v (for Su) or +u (for Sv) side. M/S about u or v IS the extreme stress.
+   */
+  Su: { pos: number; neg: number }
+  Sv: { pos: number; neg: number }
+  /** Set when Ixy ≠ 0: M/S about x or y is then not the extreme stress. */
+  moduliNote: string | null
+  /**
+   * Plastic section moduli (mm³) about x, y and the principal axes u, v: geometric for one material,
+   * "equivalent, for fy of the reference material" for several; null when a strength is missing.
+   * The plastic neutral axes: y of the PNA for Zx, x for Zy.
+   */
+  Z: { x: number | null; y: number | null; u: number | null; v: number | null }
   pna: { y: number; x: number }
+  /** The plastic analysis in full: method, note, Mp (N·mm) in both senses per axis. */
+  plastic: PlasticResult
+  /** Z / S_min about x and y (-), one material only. */
+  shapeFactor: { x: number | null; y: number | null }
   /** Polar second moment Ixx + Iyy about the centroid. Not the torsion constant. */
   Ip: number
   bounds: Bounds
@@ -150,25 +188,18 @@ export interface ContactResult {
   message: string
 }
 
-export interface ShearFlowResult {
-  part: number
-  name: string
-  /** Shear flow across the interface separating the part from the rest (N/mm). */
-  q: number
-  /** First moments of the part about the centroid (mm³, equivalent). */
-  Qx: number
-  Qy: number
-}
-
 /** A geometry or input problem that names where it is. */
 export class SectionError extends Error {
   readonly part: number | null
   readonly vertex: number | null
   readonly ring: number | null
-  constructor(message: string, where: { part?: number | null; ring?: number | null; vertex?: number | null } = {}) {
+  /** The section-wide cut (0-based) at fault, when it is a cut and not a part. */
+  readonly cut: number | null
+  constructor(message: string, where: { part?: number | null; ring?: number | null; vertex?: number | null; cut?: boolean } = {}) {
     super(message)
     this.name = 'SectionError'
-    this.part = where.part ?? null
+    this.cut = where.cut ? (where.part ?? null) : null
+    this.part = where.cut ? null : (where.part ?? null)
     this.ring = where.ring ?? null
     this.vertex = where.vertex ?? null
   }

@@ -1,15 +1,23 @@
 import { z } from 'zod'
-import { SketchDocumentSchema, type SketchDocument } from './document'
+import { SketchDocumentSchema, migrateDocument, type SketchDocument } from './document'
 
 const Title = z.string({ error: 'Give the sketch a title' }).trim().min(1, 'Give the sketch a title').max(160, 'A title has at most 160 characters')
 const Project = z.string().trim().max(160, 'A project name has at most 160 characters')
 const Description = z.string().max(5000, 'A description has at most 5000 characters')
+/** A document of this or an older schema (upgraded first, so a script may send what it saved earlier). */
+const Document = z.preprocess((value) => {
+  try {
+    return migrateDocument(value)
+  } catch {
+    return value // the schema check below then says what is wrong
+  }
+}, SketchDocumentSchema)
 
 export const CreateSketchBody = z.object({
   title: Title,
   project: Project.default(''),
   description: Description.default(''),
-  document: SketchDocumentSchema.optional(),
+  document: Document.optional(),
 })
 
 export const UpdateSketchBody = z.object({
@@ -17,7 +25,7 @@ export const UpdateSketchBody = z.object({
   title: Title.optional(),
   project: Project.optional(),
   description: Description.optional(),
-  document: SketchDocumentSchema.optional(),
+  document: Document.optional(),
 })
 
 export const ListSketchesQuery = z.object({

@@ -1,7 +1,8 @@
 import { z } from 'zod'
+import { upgradeDocument } from './migrate'
 
 /** The current Kernwise sketch document format. Bump it with a migration in `migrateDocument`. */
-export const DOCUMENT_SCHEMA = 'kernwise.sketch/1'
+export const DOCUMENT_SCHEMA = 'kernwise.sketch/2'
 
 /** Most vertices one sketch or one analysis request may carry (README "Limits"). */
 export const MAX_VERTICES = 250_000
@@ -11,27 +12,41 @@ const coord = finite('A coordinate').refine(v => Math.abs(v) <= 1e9, 'A coordina
 const Vertex = z.tuple([coord, coord], { error: 'A vertex is a pair [x, y] in mm' })
 const RingSchema = z.array(Vertex).min(3, 'A ring needs at least 3 vertices')
 const Id = z.string().min(1).max(64)
+const EffectiveLength = finite('Effective length').refine(v => v > 0, 'The effective length must be positive').nullable().default(null)
 
 export const MaterialSchema = z.object({
   name: z.string().max(80).default('Steel'),
   E: finite('E').refine(v => v > 0, 'E must be positive (MPa)'),
   fy: finite('fy').refine(v => v > 0, 'fy must be positive (MPa)').optional(),
   density: finite('Density').refine(v => v > 0, 'Density must be positive (kg/m³)').optional(),
-  /** Allowable stress for the utilisation check (MPa), typed by the user. */
-  allowable: finite('Allowable stress').refine(v => v > 0, 'Allowable stress must be positive (MPa)').optional(),
+  /** Allowable stresses for the utilisation check (MPa, magnitudes), typed by the user: in tension and in compression. */
+  allowableT: finite('Allowable tension').refine(v => v > 0, 'The allowable tension must be positive (MPa)').optional(),
+  allowableC: finite('Allowable compression').refine(v => v > 0, 'The allowable compression must be positive (MPa)').optional(),
+  /** Compression strength (MPa) of a concrete-like material, for bearing and the plastic stress block. */
+  fc: finite('fc').refine(v => v > 0, 'fc must be positive (MPa)').optional(),
+  /** Stress-block factor applied to fc in plastic capacity (-); 0.85 when not given (common practice). */
+  stressBlock: finite('Stress-block factor').refine(v => v > 0 && v <= 1, 'The stress-block factor lies in (0, 1]').optional(),
   noTension: z.boolean().optional(),
 })
 
 export const HoleSchema = z.object({
   id: Id,
-  /** 'void' lies inside an outline; 'cut' crosses its edge (a slot, a bolt hole at the edge). */
-  kind: z.enum(['void', 'cut']).default('void'),
+  /**
+   * A hole of its own part only: 'void' lies inside the outline; 'notch' crosses its edge (a slot,
+   * a cope). An opening through several parts is a part of kind 'cut' instead.
+   */
+  kind: z.enum(['void', 'notch']).default('void'),
   ring: RingSchema,
 })
 
 export const PartSchema = z.object({
   id: Id,
   name: z.string().max(80).default('Part'),
+  /**
+   * 'solid' is material; 'cut' is an opening through every part it overlaps (a bolt hole through a
+   * flange and its cover plate): its outline is subtracted, its holes and material are ignored.
+   */
+  kind: z.enum(['solid', 'cut']).default('solid'),
   outline: RingSchema,
   holes: z.array(HoleSchema).default([]),
   material: MaterialSchema,
@@ -71,9 +86,13 @@ export const SettingsSchema = z.object({
   chordTolerance: finite('Chord tolerance').refine(v => v > 0, 'The chord tolerance must be positive').default(0.05),
   referenceE: finite('Reference E').refine(v => v > 0, 'Reference E must be positive').nullable().default(null),
   noTension: z.boolean().default(false),
-  /** Effective length KL for the slenderness note (mm), null when not given. */
-  effectiveLength: finite('Effective length').refine(v => v > 0, 'The effective length must be positive').nullable().default(null),
-  shear: z.object({ Vx: finite('Vx').default(0), Vy: finite('Vy').default(0) }).default({ Vx: 0, Vy: 0 }),
+  /** Effective lengths K·L (mm) about the major (u) and minor (v) principal axes; null when not given. */
+  effectiveLength: z.object({ u: EffectiveLength, v: EffectiveLength }).default({ u: null, v: null }),
+  /** Shear forces (N) and the weld or fastener lines per connection that share the shear flow. */
+  shear: z.object({ Vx: finite('Vx').default(0), Vy: finite('Vy').default(0), lines: z.union([z.literal(1), z.literal(2)]).default(1) }).default({ Vx: 0, Vy: 0, lines: 1 }),
+  /** Display units of areas and second moments (the trade's choices); null follows the unit system. */
+  areaUnit: z.enum(['mm2', 'cm2', 'm2', 'in2']).nullable().default(null),
+  inertiaUnit: z.enum(['mm4', 'cm4', 'm4', 'in4']).nullable().default(null),
   /** What the stress view shows: a case, a combination, or the envelope of all combinations. */
   show: z.object({ type: z.enum(['case', 'combination', 'envelope']), id: z.string().nullable() }).default({ type: 'case', id: null }),
 })
@@ -118,25 +137,9 @@ export function emptyDocument(): SketchDocument {
 }
 
 /**
- * Brings a stored document of any known schema up to the current one. Documents saved before
- * the `schema` field existed (an early draft format with `version: 0`) are upgraded here;
- * add one step per future schema. Throws with a readable message on an unknown schema.
+ * Brings a stored document of any known schema up to the current one, one step per schema
+ * (see shared/sketch/migrate.ts). Throws with a readable message on an unknown schema.
  */
 export function migrateDocument(raw: unknown): unknown {
-  if (!raw || typeof raw !== 'object') throw new Error('The document must be a JSON object')
-  const doc = raw as Record<string, unknown>
-  if (doc.schema === DOCUMENT_SCHEMA) return doc
-  if (doc.schema === undefined && doc.version === 0) {
-    // Draft format: one implicit load case, loads without a case id.
-    const loads = Array.isArray(doc.loads) ? doc.loads : []
-    return {
-      schema: DOCUMENT_SCHEMA,
-      parts: doc.parts ?? [],
-      cases: [{ id: 'case-1', name: 'Case 1', Mx: 0, My: 0 }],
-      combinations: [],
-      loads: loads.map((l: any, i: number) => ({ id: l?.id ?? `load-${i + 1}`, caseId: 'case-1', ...l })),
-      settings: doc.settings ?? {},
-    }
-  }
-  throw new Error(`Unknown document schema "${String(doc.schema)}"; this Kernwise understands "${DOCUMENT_SCHEMA}"`)
+  return upgradeDocument(raw, DOCUMENT_SCHEMA)
 }

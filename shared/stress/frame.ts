@@ -1,7 +1,7 @@
 import { ringExtent } from '../geometry/bounds'
 import type { Line, Ring } from '../geometry/types'
 import { envelopeExtremes, type LoadSet } from '../loads/combine'
-import { solveContact } from '../mechanics/contact'
+import { contactUnderActions, type ContactRegion } from '../mechanics/contact'
 import { inKern, kernMargin, neutralAxis, planeExtremes, resultantActions, stressPlane, tensionOnset, type InertiaLike, type TensionOnset } from '../mechanics/stress'
 import type { ContactResult, StressPlane, StressPoint } from '../mechanics/types'
 import { lineInRings } from './field'
@@ -57,9 +57,15 @@ export interface StressFrame {
   contact: ContactResult | null
   /** Colour scale half-range (MPa). */
   limit: number
+  /** No-tension envelope: the load sets (indexes) that overturn and so are left out of it. */
+  overturning: number[]
+  /** Envelope: the load set (index into the sets) that gives `min` and the one that gives `max`. */
+  governs: { min: number | null; max: number | null }
+  /** Values above this are held there when drawn and checked: 0 for a no-tension view, else Infinity. */
+  clampAbove: number
 }
 
-const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1 }
+const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1, overturning: [], governs: { min: null, max: null }, clampAbove: Infinity }
 const scratchSeg: number[] = []
 const scratchT: number[] = []
 
@@ -87,10 +93,10 @@ export function evaluateFrame(input: FrameInput, dir: readonly [number, number] 
     ? { P: first.P, N: first.N, Mx: first.Mx, My: first.My, x: first.ex === null ? null : xc + first.ex, y: first.ey === null ? null : yc + first.ey }
     : null
 
-  if (single && input.noTension) {
-    const P = first.P
-    const loads = resultant!.x !== null ? [{ P, x: resultant!.x, y: resultant!.y! }] : []
-    const contact = solveContact(props, regions.map(r => ({ n: r.n, polygons: r.rings.map(ring => [ring]) })), hull, loads)
+  const contactRegions: ContactRegion[] | null = input.noTension ? regions.map(r => ({ n: r.n, polygons: r.rings.map(ring => [ring]) })) : null
+  if (single && contactRegions) {
+    // The same entry point as the server: the resultant of the loads and the applied moments.
+    const contact = contactUnderActions(props, contactRegions, hull, sets[0]!.loads, sets[0]!.moments)
     const q = contact.plane
     const peak = contact.peak
     return {
@@ -105,20 +111,14 @@ export function evaluateFrame(input: FrameInput, dir: readonly [number, number] 
       ...kernState(input, first, dir),
       contact,
       limit: peak ? Math.max(peak.value, 1e-9) : 1,
+      clampAbove: 0,
     }
   }
+  if (contactRegions) return contactEnvelope(input, contactRegions)
 
-  let min: StressPoint | null = null
-  let max: StressPoint | null = null
-  for (const region of regions) {
-    const pts = regions.length === 1 ? hull : region.rings.flat()
-    const ext = envelopeExtremes(planes, pts, region.n)
-    if (!ext) continue
-    if (min === null || ext.min.value < min.value) min = { value: ext.min.value, x: ext.min.x, y: ext.min.y }
-    if (max === null || ext.max.value > max.value) max = { value: ext.max.value, x: ext.max.x, y: ext.max.y }
-  }
+  const { min, max, governs } = extremesOver(regions, hull, planes)
   const limit = Math.max(Math.abs(min?.value ?? 0), Math.abs(max?.value ?? 0), 1e-9)
-  if (!single) return { ...EMPTY, kind: 'envelope', planes, min, max, limit }
+  if (!single) return { ...EMPTY, kind: 'envelope', planes, min, max, limit, governs }
 
   const plane = planes[0]!
   const neutral = neutralAxis(plane, ringExtent(hull))
@@ -132,6 +132,52 @@ export function evaluateFrame(input: FrameInput, dir: readonly [number, number] 
     }
   }
   return { ...EMPTY, kind: 'plane', planes, resultant, min, max, neutral, neutralInSection: inside, ...kernState(input, first, dir), limit }
+}
+
+/** Most compressive and most tensile point over the regions' vertices for the planes, and which plane gives each. */
+function extremesOver(regions: readonly FrameRegion[], hull: Ring, planes: readonly StressPlane[]): { min: StressPoint | null; max: StressPoint | null; governs: StressFrame['governs'] } {
+  let min: StressPoint | null = null
+  let max: StressPoint | null = null
+  const governs: StressFrame['governs'] = { min: null, max: null }
+  for (const region of regions) {
+    const pts = regions.length === 1 ? hull : region.rings.flat()
+    const ext = envelopeExtremes(planes, pts, region.n)
+    if (!ext) continue
+    if (min === null || ext.min.value < min.value) {
+      min = { value: ext.min.value, x: ext.min.x, y: ext.min.y }
+      governs.min = ext.min.set
+    }
+    if (max === null || ext.max.value > max.value) {
+      max = { value: ext.max.value, x: ext.max.x, y: ext.max.y }
+      governs.max = ext.max.set
+    }
+  }
+  return { min, max, governs }
+}
+
+/**
+ * The envelope of several load sets on a no-tension material: each set's contact pressure (the
+ * same solver as a single set), so the envelope is of the no-tension pressures, never of the linear
+ * planes; tension is never shown (max is null, values above 0 are held at 0). Sets that overturn
+ * have no pressure and are listed in `overturning`.
+ */
+function contactEnvelope(input: FrameInput, regions: readonly ContactRegion[]): StressFrame {
+  const planes: StressPlane[] = []
+  const setOf: number[] = []
+  const overturning: number[] = []
+  input.sets.forEach((set, k) => {
+    const q = contactUnderActions(input.props, regions, input.hull, set.loads, set.moments).plane
+    if (q === null) overturning.push(k)
+    else {
+      planes.push({ a: -q.a, b: -q.b, c: -q.c })
+      setOf.push(k)
+    }
+  })
+  const { min, governs } = extremesOver(input.regions, input.hull, planes)
+  const compressive = min !== null && min.value < 0 ? min : null
+  const limit = Math.max(Math.abs(compressive?.value ?? 0), 1e-9)
+  const governing = compressive && governs.min !== null ? setOf[governs.min]! : null
+  return { ...EMPTY, kind: 'envelope', planes, min: compressive, max: null, limit, overturning, governs: { min: governing, max: null }, clampAbove: 0 }
 }
 
 function kernState(input: FrameInput, act: ReturnType<typeof resultantActions>, dir: readonly [number, number]): Pick<StressFrame, 'inKern' | 'margin' | 'onset'> {

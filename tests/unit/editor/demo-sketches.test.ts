@@ -26,10 +26,17 @@ describe('demo sketches (../shared/scenario.md)', () => {
     expect(demos[0]!.document.loads[0]!.P).toBe(320_000)
   })
 
-  it('the mezzanine post loses the four 22 mm bolt holes through 10 mm plates from its gross area', () => {
+  it('the mezzanine post loses four 22 mm bolt holes through a 10 mm plate and an 11.5 mm flange each (by hand: 4·22·21.5)', () => {
     const d = demos[1]!.document
-    const gross = analyseSection(AnalysisRequest.parse(analysisRequestFor({ ...d, parts: d.parts.map(p => ({ ...p, holes: [] })) })))
+    const gross = analyseSection(AnalysisRequest.parse(analysisRequestFor({ ...d, parts: d.parts.filter(p => p.kind !== 'cut') })))
     const net = analyseSection(AnalysisRequest.parse(analysisRequestFor(d)))
-    expect(gross.properties.area - net.properties.area).toBeCloseTo(4 * 22 * 10, 6)
+    expect(gross.properties.area - net.properties.area).toBeCloseTo(4 * 22 * (10 + 11.5), 6)
+    // Each cut goes through a plate and a channel flange.
+    expect(net.cuts.map(c => c.parts.length)).toEqual([2, 2, 2, 2])
+  })
+
+  it.each(demos.map(d => [d.title, d] as const))('%s shows no warning about holes or cuts', (_, d) => {
+    const result = analyseSection(AnalysisRequest.parse(analysisRequestFor(d.document)))
+    expect(result.warnings.filter(w => /hole|cut|notch/i.test(w))).toEqual([])
   })
 })

@@ -33,8 +33,8 @@ function zAboutHorizontal(prepared: PreparedSection, yp: number): number {
 describe('plasticModuli: single material (PNA halves the area)', () => {
   it('rectangle b x h: Zx = bh²/4, Zy = hb²/4, PNAs through the centre (Gere & Goodno)', () => {
     const z = plastic([{ outline: rect(-20, 5, 60, 150) }])
-    expectClose(z.Zx, (60 * 150 ** 2) / 4, 1e-13)
-    expectClose(z.Zy, (150 * 60 ** 2) / 4, 1e-13)
+    expectClose(z.x.Z!, (60 * 150 ** 2) / 4, 1e-13)
+    expectClose(z.y.Z!, (150 * 60 ** 2) / 4, 1e-13)
     expectClose(z.pnaY, 80, 1e-14)
     expectClose(z.pnaX, 10, 1e-14)
   })
@@ -44,11 +44,14 @@ describe('plasticModuli: single material (PNA halves the area)', () => {
     // Above: 200·14.5·7.25 = 21 025. Below: flange 200·5.5·2.75 = 3025; web 1800·(5.5 + 90) = 171 900.
     const z = plastic([{ outline: rect(-100, 180, 200, 20) }, { outline: rect(-5, 0, 10, 180) }])
     expectClose(z.pnaY, 185.5, 1e-13)
-    expectClose(z.Zx, 21_025 + 3025 + 171_900, 1e-12)
+    expectClose(z.x.Z!, 21_025 + 3025 + 171_900, 1e-12)
     // Symmetric about x = 0: Zy = 20·200²/4 + 180·10²/4 = 204 500.
     expectClose(z.pnaX, 0, 1e-12, 100)
-    expectClose(z.Zy, 204_500, 1e-12)
-    expect(z.basis).toBe('force')
+    expectClose(z.y.Z!, 204_500, 1e-12)
+    expect(z.method).toBe('geometric')
+    // One steel (fy 355 by default): Mp = fy·Z in both senses.
+    expectClose(z.x.Mp!, 355 * z.x.Z!, 1e-12)
+    expectClose(z.x.MpNeg!, 355 * z.x.Z!, 1e-12)
   })
 
   it('triangle (apex up) base 120, height 90: PNA at h(1 - 1/√2) from the base, converged to 1e-12', () => {
@@ -62,28 +65,50 @@ describe('plasticModuli: single material (PNA halves the area)', () => {
     const heightAbove = h - yp
     const zAbove = (A / 2) * (heightAbove / 3)
     const centroidBelow = (A * (h / 3) - (A / 2) * (yp + heightAbove / 3)) / (A / 2)
-    expectClose(z.Zx, zAbove + (A / 2) * (yp - centroidBelow), 1e-12)
-    expectClose(z.Zx, zAboutHorizontal(prepared, z.pnaY), 1e-12)
+    expectClose(z.x.Z!, zAbove + (A / 2) * (yp - centroidBelow), 1e-12)
+    expectClose(z.x.Z!, zAboutHorizontal(prepared, z.pnaY), 1e-12)
   })
 
   it('two flanges with a gap (no web): any PNA in the gap gives Z = 2·A_f·d', () => {
     const z = plastic([{ outline: rect(0, 0, 100, 10) }, { outline: rect(0, 190, 100, 10) }])
     expect(z.pnaY).toBeGreaterThanOrEqual(10)
     expect(z.pnaY).toBeLessThanOrEqual(190)
-    expectClose(z.Zx, 2 * 1000 * 95, 1e-12)
+    expectClose(z.x.Z!, 2 * 1000 * 95, 1e-12)
   })
 
   it('a box with a hole: Zx = BH²/4 - bh²/4', () => {
     const z = plastic([{ outline: rect(0, 0, 200, 300), holes: [rect(10, 20, 180, 260)] }])
-    expectClose(z.Zx, (200 * 300 ** 2) / 4 - (180 * 260 ** 2) / 4, 1e-12)
+    expectClose(z.x.Z!, (200 * 300 ** 2) / 4 - (180 * 260 ** 2) / 4, 1e-12)
   })
 
   it('translation to 5e6 mm leaves Z unchanged and moves the PNA with the section', () => {
     const near = plastic([{ outline: rect(-100, 180, 200, 20) }, { outline: rect(-5, 0, 10, 180) }])
     const far = plastic([{ outline: rect(5e6 - 100, 5e6 + 180, 200, 20) }, { outline: rect(5e6 - 5, 5e6, 10, 180) }])
-    expectClose(far.Zx, near.Zx, 1e-9)
-    expectClose(far.Zy, near.Zy, 1e-9)
+    expectClose(far.x.Z!, near.x.Z!, 1e-9)
+    expectClose(far.y.Z!, near.y.Z!, 1e-9)
     expectClose(far.pnaY - 5e6, near.pnaY, 1e-9)
+  })
+})
+
+describe('plasticModuli: independent of E for one material', () => {
+  it('an S355 rectangle 100 x 200 with referenceE 210 000: Zx = bh²/4 = 1 000 000 mm³ (closed form; was 952 381)', () => {
+    const prepared = prepareSection([{ outline: rect(0, 0, 100, 200), material: { E: 200_000, fy: 355 } }], { referenceE: 210_000 })
+    const z = plasticModuli(prepared)
+    expectClose(z.x.Z!, (100 * 200 ** 2) / 4, 1e-12)
+    expectClose(z.y.Z!, (200 * 100 ** 2) / 4, 1e-12)
+    expectClose(z.x.Mp!, 355 * 1_000_000, 1e-12)
+    expect(z.method).toBe('geometric')
+  })
+
+  it('about the principal axes: a 60 x 150 rectangle turned 30° has Zu = 60·150²/4 and Zv = 150·60²/4 (closed form)', () => {
+    const turn = (p: Point): Point => {
+      const c = Math.cos(Math.PI / 6)
+      const s = Math.sin(Math.PI / 6)
+      return [c * p[0] - s * p[1], s * p[0] + c * p[1]]
+    }
+    const z = plasticModuli(prepareSection([{ outline: rect(-30, -75, 60, 150).map(turn) }]), 30)
+    expectClose(z.u.Z!, (60 * 150 ** 2) / 4, 1e-10)
+    expectClose(z.v.Z!, (150 * 60 ** 2) / 4, 1e-10)
   })
 })
 
@@ -100,23 +125,40 @@ describe('plasticModuli: several materials', () => {
       { outline: rect(0, 0, 100, 10), material: s235 },
     ])
     const t = 10 - 295_000 / 35_500
-    expect(z.basis).toBe('force')
+    expect(z.method).toBe('force')
     expectClose(z.pnaY, 10 + t, 1e-12)
     // Mp by hand: S355 above (100·(10 - t), arm (10 - t)/2), S355 below (100·t, arm t/2), S235 (1000, arm t + 5).
     const Mp = 355 * (100 * (10 - t) * ((10 - t) / 2) + 100 * t * (t / 2)) + 235 * 1000 * (t + 5)
-    expectClose(z.Zx, Mp / 355, 1e-12)
+    expectClose(z.x.Mp!, Mp, 1e-12)
+    expectClose(z.x.Z!, Mp / 355, 1e-12)
   })
 
-  it('fy missing on some region: the PNA halves the transformed area (weights n = E/E_ref)', () => {
-    // Steel 100 x 10 on top of aluminium 100 x 20 (n = 0.35): weighted areas 1000 and 700.
+  it('fy missing on some region: no plastic capacity and a note naming the material (never E-weighted)', () => {
     const z = plastic([
-      { outline: rect(0, 20, 100, 10), material: { E: 200_000 } },
-      { outline: rect(0, 0, 100, 20), material: { E: 70_000 } },
+      { outline: rect(0, 20, 100, 10), material: { E: 200_000, fy: 355 } },
+      { outline: rect(0, 0, 100, 20), material: { name: 'Aluminium', E: 70_000 } },
     ])
-    expect(z.basis).toBe('area')
-    // Half = 850: in the steel, 100·(30 - yp) = 850, so yp = 21.5.
-    expectClose(z.pnaY, 21.5, 1e-12)
-    const Zx = 100 * 8.5 * 4.25 + 100 * 1.5 * 0.75 + 0.35 * 2000 * 11.5
-    expectClose(z.Zx, Zx, 1e-12)
+    expect(z.method).toBe('unavailable')
+    expect(z.x.Z).toBeNull()
+    expect(z.x.Mp).toBeNull()
+    expect(z.note).toMatch(/Aluminium has no yield strength fy/)
+  })
+
+  it('steel plate under a concrete slab (no tension, 0.85·fc): PNA and Mp in both senses by force balance (by hand)', () => {
+    // Steel 200 x 20 (y 0..20, fy 355) under a slab 1000 x 100 (y 20..120, fc 30, stress block 0.85).
+    const z = plastic([
+      { outline: rect(0, 0, 200, 20), material: { E: 200_000, fy: 355 } },
+      { outline: rect(-400, 20, 1000, 100), material: { name: 'Concrete', E: 30_000, fc: 30, noTension: true } },
+    ])
+    expect(z.method).toBe('force')
+    // Below in compression: the slab above carries no tension, so the PNA halves the steel: y = 10,
+    // Mp = 355·200·20²/4.
+    expectClose(z.x.Mp!, (355 * 200 * 20 ** 2) / 4, 1e-9)
+    // Above in compression: 0.85·30·1000·a = 355·4000, a = 55.686 mm; Mp = T·(PNA - 10) + C·a/2.
+    const a = (355 * 4000) / (0.85 * 30 * 1000)
+    const pna = 120 - a
+    expectClose(z.x.MpNeg!, 355 * 4000 * (pna - 10) + 0.85 * 30 * 1000 * a * (a / 2), 1e-9)
+    // Equivalent Z for the reference material (steel, the first part): the smaller Mp over its fy.
+    expectClose(z.x.Z!, z.x.Mp! / 355, 1e-12)
   })
 })

@@ -67,28 +67,72 @@ describe('prepareSection: normalised result', () => {
 })
 
 describe('prepareSection: Booleans', () => {
-  it('a bolt hole through a plate and the flange below cuts both parts: area falls by d·(t_plate + t_flange)', () => {
-    // Plate 200 x 12 on top of a flange 200 x 16 (adjacent, same steel); a 22 mm hole drawn on the
-    // plate runs through both thicknesses.
+  it('a hole cuts its own part only: a bolt hole drawn on the plate leaves the flange below whole (by hand: 200·28 - 22·12)', () => {
     const d = 22
-    const hole = rect(60, -1, d, 29) // from below the flange to above the plate
+    const hole = rect(60, -1, d, 29) // drawn from below the flange to above the plate
     const prepared = prepareSection([
-      { name: 'Plate', outline: rect(0, 16, 200, 12), holes: [hole], material: steel },
+      { name: 'Plate', outline: rect(0, 16, 200, 12), notches: [hole], material: steel },
       { name: 'Flange', outline: rect(0, 0, 200, 16), material: steel },
     ])
+    expectClose(sectionArea(prepared), 200 * 28 - d * 12, 1e-12)
+    expectClose(netArea(prepared.parts[1]!.polygons), 200 * 16, 1e-12)
+    expect(prepared.warnings).toEqual([]) // a notch is meant to cross the edge
+  })
+
+  it('a section-wide cut through a plate and the flange below cuts both parts: area falls by d·(t_plate + t_flange), listed per part', () => {
+    const d = 22
+    const prepared = prepareSection([
+      { name: 'Plate', outline: rect(0, 16, 200, 12), material: steel },
+      { name: 'Flange', outline: rect(0, 0, 200, 16), material: steel },
+    ], { cuts: [rect(60, -1, d, 29)] })
     expectClose(sectionArea(prepared), 200 * 28 - d * 28, 1e-12)
     expectClose(netArea(prepared.parts[0]!.polygons), 200 * 12 - d * 12, 1e-12)
     expectClose(netArea(prepared.parts[1]!.polygons), 200 * 16 - d * 16, 1e-12)
     expect(prepared.regions).toHaveLength(1) // one material: unioned
-    expect(prepared.warnings).toContain('Part 1, hole 1 also cuts part 2.')
+    expect(prepared.parts.map(p => p.cuts)).toEqual([[0], [0]])
+    expect(prepared.cuts).toHaveLength(1)
+    expect(prepared.cuts[0]!.parts).toEqual([0, 1])
+    expectClose(prepared.cuts[0]!.area, d * 28, 1e-12)
+    expect(prepared.warnings).toEqual([])
   })
 
-  it('the bolt-hole cut gives the same areas 5e6 mm from the origin (to 1e-9)', () => {
+  it('box 300 x 300 x 10 drawn as one part with its void, plus a 10 x 300 stiffener across the void: A = 11 600 + 10·280 = 14 400 mm² (by hand)', () => {
+    const box = { name: 'Box', outline: rect(-150, -150, 300, 300), holes: [rect(-140, -140, 280, 280)], material: steel }
+    const stiffener = { name: 'Stiffener', outline: rect(-5, -150, 10, 300), material: steel }
+    const prepared = prepareSection([box, stiffener])
+    expectClose(sectionArea(prepared), 300 * 300 - 280 * 280 + 10 * 280, 1e-12)
+    expect(prepared.warnings).toEqual([])
+  })
+
+  it('a plate drawn wholly inside a tube\'s void counts in full (by hand: 100² - 80² + 20·20)', () => {
+    const prepared = prepareSection([
+      { outline: rect(0, 0, 100, 100), holes: [rect(10, 10, 80, 80)], material: steel },
+      { outline: rect(40, 40, 20, 20), material: steel },
+    ])
+    expectClose(sectionArea(prepared), 100 * 100 - 80 * 80 + 400, 1e-12)
+  })
+
+  it('a cut that overlaps no part is named in a warning; one that swallows a part removes it', () => {
+    const apart = prepareSection([{ outline: rect(0, 0, 100, 100) }], { cuts: [rect(200, 0, 10, 10)] })
+    expect(apart.warnings).toEqual(['Cut 1 overlaps no part and removes nothing.'])
+    const swallowed = prepareSection([{ outline: rect(0, 0, 100, 100) }, { name: 'Pin', outline: rect(200, 0, 10, 10) }], { cuts: [rect(195, -5, 20, 20)] })
+    expect(swallowed.warnings).toEqual(['Part 2 (Pin) is cut away entirely.'])
+    expectClose(sectionArea(swallowed), 10_000, 1e-12)
+  })
+
+  it('a self-crossing cut is rejected naming the cut, not a part', () => {
+    const error = rejection([{ outline: rect(0, 0, 100, 100) }], { cuts: [[[0, 0], [10, 10], [10, 0], [0, 10]]] })
+    expect(error.message).toMatch(/^Cut 1: the edge from vertex/)
+    expect(error.cut).toBe(0)
+    expect(error.part).toBeNull()
+  })
+
+  it('the section-wide cut gives the same areas 5e6 mm from the origin (to 1e-9)', () => {
     const shift = (ring: Point[]): Point[] => ring.map((p): Point => [p[0] + 5e6, p[1] + 5e6])
     const prepared = prepareSection([
-      { outline: shift(rect(0, 16, 200, 12)), holes: [shift(rect(60, -1, 22, 29))], material: steel },
+      { outline: shift(rect(0, 16, 200, 12)), material: steel },
       { outline: shift(rect(0, 0, 200, 16)), material: steel },
-    ])
+    ], { cuts: [shift(rect(60, -1, 22, 29))] })
     expectClose(sectionArea(prepared), 200 * 28 - 22 * 28, 1e-9)
     expect(prepared.origin).toEqual([5e6 + 100, 5e6 + 14])
   })
@@ -109,7 +153,7 @@ describe('prepareSection: Booleans', () => {
       { outline: rect(0, 0, 100, 50), material: steel },
       { outline: rect(50, 25, 100, 50), material: concrete },
     ])
-    expect(error.message).toMatch(/^Parts 1 and 3 overlap/)
+    expect(error.message).toMatch(/^Part 1 and Part 3 overlap/)
     expect(error.message).toMatch(/different materials/)
   })
 
@@ -134,7 +178,11 @@ describe('prepareSection: Booleans', () => {
   it('a hole partly outside its outline cuts the edge, with a warning', () => {
     const prepared = prepareSection([{ outline: rect(0, 0, 100, 100), holes: [rect(90, 40, 20, 20)] }])
     expectClose(sectionArea(prepared), 10_000 - 10 * 20, 1e-12)
-    expect(prepared.warnings).toEqual(["Part 1, hole 1 extends beyond the part's outline; it is treated as a cut at the edge."])
+    expect(prepared.warnings).toEqual(["Part 1, hole 1 extends beyond the part's outline; it cuts the edge as a notch (mark it a notch if that is meant)."])
+    // The same ring given as a notch is meant to cross the edge: same area, no warning.
+    const notch = prepareSection([{ outline: rect(0, 0, 100, 100), notches: [rect(90, 40, 20, 20)] }])
+    expectClose(sectionArea(notch), 10_000 - 10 * 20, 1e-12)
+    expect(notch.warnings).toEqual([])
   })
 
   it('a hole inside another hole cuts nothing more, with a warning', () => {
@@ -200,8 +248,9 @@ describe('prepareSection: rejections name the part, ring and vertex', () => {
 
   it('a hole entirely outside its outline', () => {
     const error = rejection([{ outline: rect(0, 0, 10, 10), holes: [rect(20, 0, 5, 5)] }])
-    expect(error.message).toBe("Part 1, hole 1 lies outside the part's outline; draw it inside the outline it cuts.")
+    expect(error.message).toBe("Part 1, hole 1 lies outside the part's outline (from its vertex 1 on); draw it inside the outline it cuts.")
     expect(error.ring).toBe(1)
+    expect(error.vertex).toBe(0)
   })
 
   it('a hole that only touches its outline from outside counts as outside', () => {
