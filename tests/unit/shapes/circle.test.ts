@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { polygonMoments } from '../../../shared/geometry/moments'
+import { ringArea } from '../../../shared/geometry/moments'
+import { circleRing, DEFAULT_CHORD_TOLERANCE } from '../../../shared/shapes/arc'
 import { circle } from '../../../shared/shapes/circle'
 import { ShapeError } from '../../../shared/shapes/common'
 import { expectClose } from '../../support/expect-close'
@@ -82,5 +84,17 @@ describe('circle(d)', () => {
     } catch (e) {
       expect((e as ShapeError).field).toBe('tol')
     }
+  })
+})
+
+describe('a round keeps its area within 0.05 % of the circle at any size (README "Method", arcs)', () => {
+  it.each([2, 20, 200, 2000, 20_000])('circle of D = %d mm at the default tolerance: |A - πD²/4| / (πD²/4) <= 0.05 %', (D) => {
+    const A = Math.abs(ringArea(circleRing([0, 0], D / 2)))
+    expect(Math.abs(A - (Math.PI * D * D) / 4) / ((Math.PI * D * D) / 4)).toBeLessThanOrEqual(5e-4)
+  })
+
+  it('a 20 mm bar is no longer 0.64 % low (closed form πD²/4 = 314.16 mm²)', () => {
+    const A = Math.abs(ringArea(circleRing([0, 0], 10, DEFAULT_CHORD_TOLERANCE)))
+    expect(A / (Math.PI * 100)).toBeGreaterThan(1 - 5e-4)
   })
 })
