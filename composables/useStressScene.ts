@@ -46,13 +46,14 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
         }
         if (at) s.labels.push({ x: at[0], y: at[1], text: formatStress(v, u), dx: 3, dy: -3, size: 10 })
       })
-    } else if (f.kind === 'envelope' && f.min && f.max) {
+    } else if (f.kind === 'envelope' && f.min && (f.max || f.clampAbove === 0)) {
+      // A no-tension envelope has no tension side: the contact pressures, held at 0 where every set lifts off.
       const lo = f.min.value
-      const hi = f.max.value
+      const hi = f.max?.value ?? 0
       const thresholds = [lo, ...isolineValues(lo, hi, 8, u.stress.perMPa), 0].filter((v, i, a) => a.indexOf(v) === i && v >= lo && v <= hi).sort((p, q) => p - q)
-      const worstC = view.envelopeSide.value === 'compression'
+      const worstC = f.clampAbove === 0 || view.envelopeSide.value === 'compression'
       for (const r of regions) {
-        const env = envelopeBands(ringsBounds(r.rings) ?? EMPTY_BOX, r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y])
+        const env = envelopeBands(ringsBounds(r.rings) ?? EMPTY_BOX, r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y], undefined, f.clampAbove)
         s.envelope.push({ rings: r.rings, base: env.base, bands: env.bands })
         for (const l of env.labels) s.labels.push({ x: l.x, y: l.y, text: formatStress(l.value, u), dx: 3, dy: -3, size: 10 })
       }

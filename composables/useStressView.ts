@@ -73,7 +73,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
     const hull = markRaw(regionsHull(a.regions)) as Ring
     // The live analysis leaves the core out of the answer (`omit`): the same function the server runs gives it here.
     const kern = markRaw((a.kern ?? kernPolygon(a.properties, hull)) as Ring[number][]) as Ring
-    return { props: a.properties, hull, kern, regions, shear: a.shear, warnings: a.warnings }
+    return { props: a.properties, hull, kern, regions, connections: a.connections, warnings: a.warnings }
   })
 
   const show = computed(() => settings.value.show)
@@ -128,7 +128,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
     const s = section.value
     const f = settled.value
     if (!s || f.planes.length === 0) return []
-    return checkUtilisation(s.regions, f.planes, f.kind === 'contact' ? 0 : Infinity)
+    return checkUtilisation(s.regions, f.planes, f.clampAbove)
   })
 
   const slender = computed(() => {

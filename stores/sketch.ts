@@ -16,6 +16,7 @@ export interface NewPart {
   name?: string
   material?: SketchMaterial
   shape?: SketchPart['shape']
+  kind?: SketchPart['kind']
 }
 
 /**
@@ -154,6 +155,7 @@ export const useSketchStore = defineStore('sketch', () => {
     const part: SketchPart = {
       id,
       name: input.name ?? `Part ${doc.value.parts.length + 1}`,
+      kind: input.kind ?? 'solid',
       outline: orientRing(input.outline, true),
       holes: (input.holes ?? []).map(h => ({ id: newId('hole'), kind: h.kind ?? 'void', ring: orientRing(h.ring, false) })),
       material: input.material ?? steel(),
@@ -220,14 +222,19 @@ export const useSketchStore = defineStore('sketch', () => {
     commitParts(`Hollow, wall ${t} mm`, ops.updateOne(doc.value.parts, id, p => ops.hollowPart(p, t)))
   }
 
-  /** Turns a drawn part into a void or cut of the part it overlaps; returns that part's id. */
+  /** Turns a drawn part into a void or notch of the part it overlaps; returns that part's id. */
   function makeHole(sourceId: string, kind: SketchHole['kind']): string {
     const { parts: next, target } = ops.partToHole(doc.value.parts, sourceId, kind)
-    commitParts(kind === 'void' ? 'Make void' : 'Make cut', next)
+    commitParts(kind === 'void' ? 'Make void' : 'Make notch', next)
     return target
   }
 
-  /** Changes a hole between void and cut. */
+  /** Makes a part material ('solid') or an opening through every part it overlaps ('cut'). */
+  function setPartKind(id: string, kind: SketchPart['kind']): void {
+    commitParts(kind === 'cut' ? 'Make cut through parts' : 'Make solid', ops.updateOne(doc.value.parts, id, p => ({ ...p, kind, holes: kind === 'cut' ? [] : p.holes, shape: kind === 'cut' ? null : p.shape })))
+  }
+
+  /** Changes a hole between void (inside the outline) and notch (through its edge). */
   function setHoleKind(id: string, holeId: string, kind: SketchHole['kind']): void {
     commitParts('Change hole', ops.updateOne(doc.value.parts, id, p => ({ ...p, holes: p.holes.map(h => (h.id === holeId ? { ...h, kind } : h)) })))
   }
@@ -365,7 +372,7 @@ export const useSketchStore = defineStore('sketch', () => {
   // undo restores) the parts as the user last saw them drawn.
   const actions = allAfterStaged({
     addPart, renamePart, removeParts, duplicateParts, moveParts, rotateParts, mirrorParts,
-    moveVertex, insertVertex, deleteVertex, makeHollow, makeHole, setHoleKind, removeHole,
+    moveVertex, insertVertex, deleteVertex, makeHollow, makeHole, setPartKind, setHoleKind, removeHole,
     unionParts, subtractParts, setMaterial, updateSettings, setShow,
     addLoad, updateLoad, moveLoad, removeLoad, addCase, renameCase, removeCase, setCaseMoments,
     addCombination, updateCombination, removeCombination, undo, redo,

@@ -249,7 +249,8 @@ export interface EnvelopeBandsOut {
  * Samples the envelope of n·planes (MPa, tension positive) over a region's bounds — the most compressive
  * value when `worstCompression`, else the most tensile — and contours it at the thresholds (increasing).
  * Each band is filled with the colour of its middle value; a label point is chosen per threshold on the
- * band's edge, inside the bounds, nearest the point `near` (mm).
+ * band's edge, inside the bounds, nearest the point `near` (mm). Values above `clampAbove` are held
+ * there (0 for a no-tension envelope: where every set lifts off the pressure is 0, never tension).
  */
 export function envelopeBands(
   bounds: Bounds,
@@ -260,6 +261,7 @@ export function envelopeBands(
   colour: (v: number) => string,
   near: readonly [number, number],
   cells = 3600,
+  clampAbove = Infinity,
 ): EnvelopeBandsOut {
   const grid = sampleGrid(bounds, cells, (x, y) => {
     let lo = Infinity
@@ -269,7 +271,8 @@ export function envelopeBands(
       if (v < lo) lo = v
       if (v > hi) hi = v
     }
-    return worstCompression ? lo : hi
+    const v = worstCompression ? lo : hi
+    return v > clampAbove ? clampAbove : v
   })
   let top = -Infinity
   for (const v of grid.values) if (v > top) top = v

@@ -10,7 +10,7 @@ const anon = () => new Client(() => server.url)
 
 // A 300 x 20 plate (mm) as a Kernwise document.
 const plateDoc = {
-  schema: 'kernwise.sketch/1',
+  schema: 'kernwise.sketch/2',
   parts: [{ id: 'p1', name: 'Plate', outline: [[0, 0], [300, 0], [300, 20], [0, 20]], holes: [], material: { name: 'Steel', E: 200000 }, shape: null }],
   cases: [{ id: 'dead', name: 'Dead', Mx: 0, My: 0 }],
   combinations: [],
@@ -40,7 +40,7 @@ describe('sketch routes', () => {
   it('without a document a new sketch gets an empty one', async () => {
     const made = await owner.post('/api/sketches', { title: 'Blank' })
     expect(made.status).toBe(201)
-    expect(made.body.document).toMatchObject({ schema: 'kernwise.sketch/1', parts: [], loads: [] })
+    expect(made.body.document).toMatchObject({ schema: 'kernwise.sketch/2', parts: [], loads: [] })
     expect(made.body.document.cases).toHaveLength(1)
   })
 

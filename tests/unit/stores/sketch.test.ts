@@ -4,6 +4,9 @@ import { watch } from 'vue'
 import { emptyDocument, type SketchDocument } from '#shared/sketch/document'
 import { ringArea } from '#shared/geometry/moments'
 import { rectangleRing } from '#shared/editor/transform'
+import { analysisRequestFor } from '#shared/editor/analysis-request'
+import { AnalysisRequest } from '#shared/analysis/contract'
+import { analyseSection } from '#shared/mechanics/analyze'
 import { HOLD_MS, useSketchStore } from '../../../stores/sketch'
 
 const net = (s: ReturnType<typeof useSketchStore>, id: string) => {
@@ -99,10 +102,25 @@ describe('sketch store: parts, each action with its undo', () => {
     expect(s.parts).toHaveLength(1)
     expect(net(s, outer)).toBe(9600)
     const hole = s.partById(outer)!.holes[0]!.id
-    roundTrip(s, () => s.setHoleKind(outer, hole, 'cut'))
-    expect(s.partById(outer)!.holes[0]!.kind).toBe('cut')
+    roundTrip(s, () => s.setHoleKind(outer, hole, 'notch'))
+    expect(s.partById(outer)!.holes[0]!.kind).toBe('notch')
     roundTrip(s, () => s.removeHole(outer, hole))
     expect(s.partById(outer)!.holes).toHaveLength(0)
+  })
+
+  it('setPartKind makes a part a cut through every part it overlaps, and undo restores it (by hand: 100·100 + 100·20 - 20·40)', () => {
+    const s = fresh()
+    const plate = s.addPart({ outline: rectangleRing([0, 0], [100, 100]) })
+    s.addPart({ outline: rectangleRing([0, 100], [100, 120]) })
+    const bolt = s.addPart({ outline: rectangleRing([40, 80], [60, 130]) })
+    roundTrip(s, () => s.setPartKind(bolt, 'cut'))
+    expect(s.partById(bolt)!.kind).toBe('cut')
+    const request = analysisRequestFor(s.doc)!
+    expect(request.parts).toHaveLength(2)
+    expect(request.cuts).toHaveLength(1)
+    const area = analyseSection(AnalysisRequest.parse(request)).properties.area
+    expect(area).toBeCloseTo(100 * 100 + 100 * 20 - 20 * 40, 6)
+    expect(s.partById(plate)!.kind).toBe('solid')
   })
 
   it('unionParts and subtractParts undo', () => {
