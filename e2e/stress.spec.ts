@@ -2,9 +2,9 @@ import { expect, test, type Page } from '@playwright/test'
 import { open, shot, signIn } from './support/helpers'
 
 // A b × h rectangle centred on the origin, b along x. Values the test computes itself:
-// A = b·h; core edge on the x axis at b/6 (middle third rule, notes §6);
-// sigma_max = P/A·(1 + 6e/b) (closed form, notes §5 with Ixy = 0);
-// footing (notes §7): contact length 3(L/2 − e) and q_max = 2P / (3B(L/2 − e)) for e > L/6.
+// A = b·h; core edge on the x axis at b/6 (middle third rule, README "Method");
+// sigma_max = P/A·(1 + 6e/b) (closed form, README "Method" with Ixy = 0);
+// footing (README "Method"): contact length 3(L/2 − e) and q_max = 2P / (3B(L/2 − e)) for e > L/6.
 const b = 400
 const h = 600
 const P = 1_000_000 // N (1000 kN), compression positive
@@ -103,7 +103,7 @@ test('dragging a load across the core edge changes the state where the test expe
   await expect(page.getByTestId('onset-vertex')).toContainText('−200')
   await shot(page, 'stress-drag-outside')
 
-  // Type the eccentricity exactly and use the footing values (notes §7) in the no-tension view.
+  // Type the eccentricity exactly and use the footing values (README "Method") in the no-tension view.
   await page.getByTestId('load-x-0').fill('100')
   await page.getByTestId('load-x-0').press('Enter')
   // P/A·(1 + 6·100/400) = 4.167·2.5 = 10.4 MPa (closed form).

@@ -5,7 +5,7 @@ import { DOCUMENT_SCHEMA, SketchDocumentSchema, type SketchDocument, type Sketch
 import { mirrorRing, rectangleRing, translateRing } from '../../shared/editor/transform'
 
 /**
- * Demo sketches of the Millrace Yard retrofit, an invented scenario (../shared/scenario.md):
+ * Demo sketches of the Millrace Yard retrofit, an invented scenario (README "Demo workspace"):
  * real documents built with the shapes registry, in mm and N (kN × 1000), y up.
  */
 

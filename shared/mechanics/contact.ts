@@ -69,7 +69,7 @@ const INSIDE_TOL = 1e-7
 const POLISH = 1e-3
 
 /**
- * No-tension contact (notes §7) under compressive point loads (N, compression-positive, at mm in
+ * No-tension contact (README "Method") under compressive point loads (N, compression-positive, at mm in
  * SECTION coordinates): the compressed plane q = a + b·x + c·y (MPa, compression-positive, section
  * coordinates) over the region where q > 0, in equilibrium with the loads. Status 'full' when the
  * resultant is inside the core, 'partial' when part lifts off, 'overturning' (all numbers null) when the

@@ -9,7 +9,7 @@ const STRAIGHT_TURN = 1e-12
 
 /**
  * The core (kern) of a section as a convex counter-clockwise ring in SECTION coordinates (mm): the set
- * of compressive load points that keep every hull vertex in compression (notes §6). One core vertex per
+ * of compressive load points that keep every hull vertex in compression (README "Method"). One core vertex per
  * hull edge, the polar reciprocal of the edge with respect to the ellipse of inertia: the load point
  * whose neutral line is that edge's line. `hull` is the convex hull of the section (either orientation;
  * straight runs allowed). Returns [] for degenerate properties or a hull of fewer than 3 points.
@@ -45,7 +45,7 @@ export function kernPolygon(props: InertiaLike, hull: Ring): Point[] {
     if (!(h > 0)) {
       throw new SectionError(`The centroid is not strictly inside the hull (at edge ${k}), so the section has no core.`)
     }
-    // Neutral line 1 + u·x + v·y = 0 coincides with the edge line; invert notes §6 for (ex, ey).
+    // Neutral line 1 + u·x + v·y = 0 coincides with the edge line; invert README "Method" for (ex, ey).
     const u = -dy / h
     const v = dx / h
     const ex = (Iyy * u + Ixy * v) / area

@@ -60,7 +60,7 @@ function inertiaDeterminant(props: InertiaLike): number | null {
 /**
  * The stress plane sigma(x, y) = a + b·x + c·y (MPa, tension-positive, x and y in SECTION coordinates, mm)
  * for N (N, tension-positive) and centroidal moments Mx, My (N·mm), by the general unsymmetric formula
- * (notes §5). Null when the properties are degenerate (no area, D = Ixx·Iyy - Ixy² ≈ 0, non-finite).
+ * (README "Method"). Null when the properties are degenerate (no area, D = Ixx·Iyy - Ixy² ≈ 0, non-finite).
  */
 export function stressPlane(props: InertiaLike, N: number, Mx: number, My: number): StressPlane | null {
   const D = inertiaDeterminant(props)
@@ -109,7 +109,7 @@ export function neutralAxis(plane: StressPlane, extent = 1): Line | null {
 
 /**
  * True when a compressive load at eccentricity (ex, ey) (mm from the centroid) keeps every hull vertex
- * in compression: notes §6, 1 + A·[(Ixx·x_i - Ixy·y_i)·ex + (Iyy·y_i - Ixy·x_i)·ey]/D >= 0 with x_i, y_i
+ * in compression: README "Method", 1 + A·[(Ixx·x_i - Ixy·y_i)·ex + (Iyy·y_i - Ixy·x_i)·ey]/D >= 0 with x_i, y_i
  * from the centroid. A vertex on the boundary (within 1e-9) counts as in. False for degenerate properties.
  */
 export function inKern(props: InertiaLike, hull: Ring, ex: number, ey: number): boolean {

@@ -23,11 +23,11 @@ export interface CheckRow {
 }
 
 /**
- * Utilisation of the worst point per material (notes §5: a plane's extremes lie on vertices, so the
+ * Utilisation of the worst point per material (README "Method": a plane's extremes lie on vertices, so the
  * ring vertices suffice): |n·sigma| at its largest over all the planes (MPa, tension positive; several
  * planes for an envelope), values above `clampAbove` held there (0 for a no-tension view). The limit
  * is the allowable stress when typed, else fy; pass when utilisation <= 1. A linear-elastic check of
- * the section only: show the caution of notes §9 beside it.
+ * the section only: show the caution of README "Method" beside it.
  */
 export function checkUtilisation(regions: readonly CheckRegion[], planes: readonly StressPlane[], clampAbove = Infinity): CheckRow[] {
   return regions.map((region) => {

@@ -29,7 +29,7 @@ export interface DisplayUnits {
 
 /**
  * SI shows kN, MPa, mm, kN/m, kN·m; US shows kip, ksi, in, kip/in, kip·ft. Factors from the editor's
- * units module (NIST SP 811, notes §1), so the stress view and the property panel agree.
+ * units module (NIST SP 811, README "Method"), so the stress view and the property panel agree.
  */
 export function displayUnits(system: UnitSystem): DisplayUnits {
   const per = (q: Quantity) => ({ label: unitLabel(q, system), factor: toDisplay(1, q, system) })

@@ -47,7 +47,7 @@ describe('POST /api/analysis', () => {
     expect(r.body.stress).toBeNull()
   })
 
-  it('an eccentric load on a rectangle: σ = −P/A (1 ± 6e/b), tension-positive (closed form, notes §5)', async () => {
+  it('an eccentric load on a rectangle: σ = −P/A (1 ± 6e/b), tension-positive (closed form, README "Method")', async () => {
     const b = 300
     const h = 200
     const P = 600_000
@@ -69,7 +69,7 @@ describe('POST /api/analysis', () => {
     expect(out.body.stress.max.value).toBeGreaterThan(0)
   })
 
-  it('no-tension footing, load at e > L/6: contact length 3(L/2 − e), q_max = 2P/(3B(L/2 − e)) (notes §7)', async () => {
+  it('no-tension footing, load at e > L/6: contact length 3(L/2 − e), q_max = 2P/(3B(L/2 − e)) (README "Method")', async () => {
     const L = 2400
     const B = 1800
     const P = 900_000

@@ -7,7 +7,7 @@ import { demoSketches } from '../../../server/database/demo-sketches'
 
 const demos = demoSketches()
 
-describe('demo sketches (../shared/scenario.md)', () => {
+describe('demo sketches (the invented Millrace Yard scenario, README "Demo workspace")', () => {
   it('has the six sketches, one submitted and one approved', () => {
     expect(demos.map(d => d.title)).toEqual(['Crane column C3', 'Mezzanine post M1', 'Brick pier P2', 'Pad footing F4', 'Canopy strut S5', 'Fabricated T-stub T6'])
     expect(demos.filter(d => d.status === 'submitted')).toHaveLength(1)

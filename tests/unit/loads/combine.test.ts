@@ -14,7 +14,7 @@ import { planeExtremes, resultantActions, stressPlane } from '../../../shared/me
 import type { InertiaLike } from '../../../shared/mechanics/stress'
 import { expectClose } from '../../support/expect-close'
 
-// A 400 (x) × 600 (y) mm rectangle centred at the origin. Closed form (notes §10): A = bh,
+// A 400 (x) × 600 (y) mm rectangle centred at the origin. Closed form (README "Method"): A = bh,
 // Ixx = b·h³/12 = 7.2e9 mm⁴, Iyy = h·b³/12 = 3.2e9 mm⁴, Ixy = 0.
 const b = 400
 const h = 600

@@ -34,7 +34,7 @@ function residuals(rings: Ring | readonly Ring[], r: ContactResult, loads: reado
   return [(F - P) / P, (Fx - Px) / (P * extent), (Fy - Py) / (P * extent)]
 }
 
-describe('solveContact: rectangular footing B×L, load on the long axis (closed form, notes §7 footing)', () => {
+describe('solveContact: rectangular footing B×L, load on the long axis (closed form, README "Method" footing)', () => {
   const B = 1200 // along x
   const L = 2400 // along y
   const cx = 350_000 // far from the origin, to exercise the local shift
@@ -317,7 +317,7 @@ describe('solveContact: regression sweep of loads near the hull (seeded, not ran
   const tri: Ring = [[0, 0], [3000, 0], [500, 1000]]
   const props: InertiaLike = {
     area: 1.5e6, centroid: { x: 3500 / 3, y: 1000 / 3 }, // triangle: A = bh/2, centroid at the mean of the vertices
-    Ixx: (3000 * 1000 ** 3) / 36, // b·h³/36 (closed form, notes §10)
+    Ixx: (3000 * 1000 ** 3) / 36, // b·h³/36 (closed form, README "Method")
     Iyy: (1000 * 3000 * (3000 ** 2 - 3000 * 500 + 500 ** 2)) / 36, // b·h·(b² - b·a + a²)/36 (closed form, from memory)
     Ixy: (1000 ** 2 * 3000 * (2 * 500 - 3000)) / 72, // b·h²·(2a - b)/72 for the apex at (a, h) (closed form, from memory)
   }

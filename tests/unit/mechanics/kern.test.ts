@@ -82,7 +82,7 @@ describe('kernPolygon', () => {
     }
   })
 
-  it.each([6, 12, 97, 720])('kernPolygon(regular %i-gon) has every vertex at r_g²/apothem from the centroid (notes §10 n-gon A and I)', (n) => {
+  it.each([6, 12, 97, 720])('kernPolygon(regular %i-gon) has every vertex at r_g²/apothem from the centroid (README "Method" n-gon A and I)', (n) => {
     const R = 500
     const { A, I } = ngonAI(n, R)
     const poly: InertiaLike = { area: A, centroid: { x: 100, y: -50 }, Ixx: I, Iyy: I, Ixy: 0 }
@@ -92,14 +92,14 @@ describe('kernPolygon', () => {
     for (const [x, y] of kern) expectClose(Math.hypot(x - 100, y + 50), expected, 1e-9)
   })
 
-  it('kernPolygon(720-gon of diameter D) approximates the circle of radius D/8 (standard result, notes §6)', () => {
+  it('kernPolygon(720-gon of diameter D) approximates the circle of radius D/8 (standard result, README "Method")', () => {
     const D = 1000
     const { A, I } = ngonAI(720, D / 2)
     const kern = kernPolygon({ area: A, centroid: { x: 0, y: 0 }, Ixx: I, Iyy: I, Ixy: 0 }, ngon(720, D / 2))
     for (const [x, y] of kern) expectClose(Math.hypot(x, y), D / 8, 1e-4)
   })
 
-  it('kernPolygon(tube D×d as 720-gons) has radius (D² + d²)/(8D) (standard result, notes §6)', () => {
+  it('kernPolygon(tube D×d as 720-gons) has radius (D² + d²)/(8D) (standard result, README "Method")', () => {
     const D = 800
     const d = 600
     const outer = ngonAI(720, D / 2)
@@ -107,7 +107,7 @@ describe('kernPolygon', () => {
     const A = outer.A - inner.A
     const I = outer.I - inner.I
     const kern = kernPolygon({ area: A, centroid: { x: 0, y: 0 }, Ixx: I, Iyy: I, Ixy: 0 }, ngon(720, D / 2))
-    const exactPolygon = I / A / ((D / 2) * Math.cos(Math.PI / 720)) // n-gon formulas, notes §10
+    const exactPolygon = I / A / ((D / 2) * Math.cos(Math.PI / 720)) // n-gon formulas, README "Method"
     for (const [x, y] of kern) {
       expectClose(Math.hypot(x, y), exactPolygon, 1e-9)
       expectClose(Math.hypot(x, y), (D * D + d * d) / (8 * D), 1e-4)
@@ -136,7 +136,7 @@ describe('kernPolygon', () => {
       expect(kernMargin(kern, xc, yc)!).toBeGreaterThan(0)
     })
 
-    it('every kern vertex puts exactly one hull edge at zero stress and the rest in compression (notes §6 inequality)', () => {
+    it('every kern vertex puts exactly one hull edge at zero stress and the rest in compression (README "Method" inequality)', () => {
       for (const [kx, ky] of kern) {
         const ex = kx - xc
         const ey = ky - yc

@@ -194,7 +194,7 @@ describe('sectionProperties: composites by the parallel-axis theorem, computed b
     expectClose(p.Ixx, (200 * 300 ** 3 - 180 * 260 ** 3) / 12, 1e-12)
   })
 
-  it('Z-section 130 x 200 x 10 (one outline): Ixy ≠ 0 by hand, and the principal axes from notes §4', () => {
+  it('Z-section 130 x 200 x 10 (one outline): Ixy ≠ 0 by hand, and the principal axes from README "Method"', () => {
     const outline: Point[] = [[-65, -100], [5, -100], [5, 90], [65, 90], [65, 100], [-5, 100], [-5, -90], [-65, -90]]
     const p = properties([{ outline }])
     const hand = byParallelAxis([{ x: -5, y: -100, w: 10, h: 200 }, { x: 5, y: 90, w: 60, h: 10 }, { x: -65, y: -100, w: 60, h: 10 }])

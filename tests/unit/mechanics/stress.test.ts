@@ -21,7 +21,7 @@ function rect(x0: number, y0: number, x1: number, y1: number): Ring {
   return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]]
 }
 
-/** Closed form (notes §10): rectangle b×h centred at (cx, cy): A = bh, I = bh³/12, Ixy = 0. */
+/** Closed form (README "Method"): rectangle b×h centred at (cx, cy): A = bh, I = bh³/12, Ixy = 0. */
 function rectProps(b: number, h: number, cx = 0, cy = 0): InertiaLike {
   return { area: b * h, centroid: { x: cx, y: cy }, Ixx: (b * h ** 3) / 12, Iyy: (h * b ** 3) / 12, Ixy: 0 }
 }
@@ -32,12 +32,12 @@ const at = (plane: { a: number; b: number; c: number }, x: number, y: number) =>
 describe('resultantActions', () => {
   const props = { centroid: { x: 10, y: 20 } }
 
-  it('resultantActions(one load) gives N = -P, Mx = N·(y - yc), My = N·(x - xc) (notes §2)', () => {
+  it('resultantActions(one load) gives N = -P, Mx = N·(y - yc), My = N·(x - xc) (README "Method")', () => {
     const r = resultantActions(props, [{ P: 1000, x: 40, y: 5 }])
     expect(r.N).toBe(-1000)
     expect(r.P).toBe(1000)
-    expectClose(r.Mx, -1000 * (5 - 20)) // notes §2 by hand: +15 000 N·mm
-    expectClose(r.My, -1000 * (40 - 10)) // notes §2 by hand: -30 000 N·mm
+    expectClose(r.Mx, -1000 * (5 - 20)) // README "Method" by hand: +15 000 N·mm
+    expectClose(r.My, -1000 * (40 - 10)) // README "Method" by hand: -30 000 N·mm
     expectClose(r.ex!, 30)
     expectClose(r.ey!, -15)
   })
@@ -89,7 +89,7 @@ describe('stressPlane', () => {
     ['Mx only', 0, 1e7, 0],
     ['My only', 0, 0, 1e7],
     ['N and both moments', -2e5, -3e6, 4e6],
-  ])('stressPlane(unequal angle, %s) is in equilibrium with N, Mx, My (independent integration, notes §5)', (_n, N, Mx, My) => {
+  ])('stressPlane(unequal angle, %s) is in equilibrium with N, Mx, My (independent integration, README "Method")', (_n, N, Mx, My) => {
     const plane = stressPlane(angle, N, Mx, My)!
     // ∫σ dA, ∫σ·(y - yc) dA, ∫σ·(x - xc) dA from the ring's own Green's moments about the centroid.
     const m = polygonMoments([angleRing], [angle.centroid.x, angle.centroid.y])
@@ -102,7 +102,7 @@ describe('stressPlane', () => {
     expectClose(s0 * m.Qy + plane.b * m.Jyy + plane.c * m.Jxy, My, 1e-9, momentScale)
   })
 
-  it('stressPlane(unequal angle, Mx) differs from the symmetric formula Mx·y/Ixx (the classic error, notes §5)', () => {
+  it('stressPlane(unequal angle, Mx) differs from the symmetric formula Mx·y/Ixx (the classic error, README "Method")', () => {
     const plane = stressPlane(angle, 0, 1e7, 0)!
     const y = 150 - angle.centroid.y
     const naive = (1e7 * y) / angle.Ixx

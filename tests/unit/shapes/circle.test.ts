@@ -6,7 +6,7 @@ import { circle } from '../../../shared/shapes/circle'
 import { ShapeError } from '../../../shared/shapes/common'
 import { expectClose } from '../../support/expect-close'
 
-// Regular n-gon of circumradius R (engineering notes §10, exact for the polygon):
+// Regular n-gon of circumradius R (README "Method", exact for the polygon):
 // A = n R² sin(2π/n) / 2, I = n R⁴ sin(2π/n)(2 + cos(2π/n)) / 24 about any centroidal axis.
 const ngonArea = (n: number, R: number) => (n * R * R * Math.sin((2 * Math.PI) / n)) / 2
 const ngonI = (n: number, R: number) => (n * R ** 4 * Math.sin((2 * Math.PI) / n) * (2 + Math.cos((2 * Math.PI) / n))) / 24

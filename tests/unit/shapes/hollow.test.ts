@@ -5,7 +5,7 @@ import { rhs, tube } from '../../../shared/shapes/hollow'
 import { expectClose } from '../../support/expect-close'
 import { centroidal, thrown } from './centroidal'
 
-// Regular n-gon of circumradius R (engineering notes §10, exact for the polygon itself).
+// Regular n-gon of circumradius R (README "Method", exact for the polygon itself).
 const ngonArea = (n: number, R: number) => (n * R * R * Math.sin((2 * Math.PI) / n)) / 2
 const ngonI = (n: number, R: number) => (n * R ** 4 * Math.sin((2 * Math.PI) / n) * (2 + Math.cos((2 * Math.PI) / n))) / 24
 

@@ -23,7 +23,7 @@ function inputFor(parts: Parameters<typeof analyseSection>[0]['parts'], sets: Lo
   }
 }
 
-// An unequal angle 150 × 90 × 12 drawn as one outline (Ixy ≠ 0: the general formula matters, notes §5).
+// An unequal angle 150 × 90 × 12 drawn as one outline (Ixy ≠ 0: the general formula matters, README "Method").
 const angle = [[0, 0], [90, 0], [90, 12], [12, 12], [12, 150], [0, 150]] as const
 const rect = (b: number, h: number) => [[-b / 2, -h / 2], [b / 2, -h / 2], [b / 2, h / 2], [-b / 2, h / 2]] as const
 
@@ -62,7 +62,7 @@ describe('evaluateFrame (client-side stress from the properties alone)', () => {
     expect(f.onset!.startsInTension).toBe(false)
   })
 
-  it('no-tension footing B × L, e > L/6: contact 3(L/2 − e) long and q_max = 2P/(3B(L/2 − e)) (closed form notes §7 footing)', () => {
+  it('no-tension footing B × L, e > L/6: contact 3(L/2 − e) long and q_max = 2P/(3B(L/2 − e)) (closed form README "Method" footing)', () => {
     const B = 600
     const L = 400
     const P = 1e6
@@ -77,7 +77,7 @@ describe('evaluateFrame (client-side stress from the properties alone)', () => {
     expectClose(-n.a / n.b, L / 2 - 3 * (L / 2 - e), 1e-6)
   })
 
-  it('applied moments enter the contact through the resultant: P at the centroid with My = −P·e gives the same peak (closed form notes §7)', () => {
+  it('applied moments enter the contact through the resultant: P at the centroid with My = −P·e gives the same peak (closed form README "Method")', () => {
     const P = 1e6
     const f = evaluateFrame(inputFor([{ outline: rect(400, 600) }], [setOf([{ P, x: 0, y: 0 }], 0, -P * 100)], { noTension: true }))
     expectClose(-f.min!.value, (2 * P) / (3 * 600 * 100), 1e-6)
