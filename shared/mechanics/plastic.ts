@@ -103,11 +103,14 @@ export function plasticModuli(prepared: PreparedSection, theta = 0): PlasticResu
   }
   const x = axis(0, 1)
   const y = axis(1, 0)
-  // About the principal axes: the normal of u is (-sin θ, cos θ); of v, (cos θ, sin θ). When θ = 0 they are x and y.
+  // About the principal axes: the normal of u is (-sin θ, cos θ); of v, (cos θ, sin θ). Within 1e-9 rad
+  // of x and y (θ ≈ 0 or ±90°) they are those axes, so their answers are reused (a turned normal swaps the senses).
   const rad = (theta * Math.PI) / 180
-  const aligned = theta === 0
-  const u = aligned ? x : axis(-Math.sin(rad), Math.cos(rad))
-  const v = aligned ? y : axis(Math.cos(rad), Math.sin(rad))
+  const flip = (a: { t: number; result: PlasticAxis }) => ({ t: -a.t, result: { offset: -a.result.offset, Mp: a.result.MpNeg, MpNeg: a.result.Mp, Z: a.result.Z } })
+  const nearX = Math.abs(Math.sin(rad)) < 1e-9
+  const nearY = Math.abs(Math.cos(rad)) < 1e-9
+  const u = nearX ? (Math.cos(rad) > 0 ? x : flip(x)) : nearY ? (Math.sin(rad) > 0 ? flip(y) : y) : axis(-Math.sin(rad), Math.cos(rad))
+  const v = nearX ? (Math.cos(rad) > 0 ? y : flip(y)) : nearY ? (Math.sin(rad) > 0 ? x : flip(x)) : axis(Math.cos(rad), Math.sin(rad))
   const note = method === 'geometric'
     ? 'One material: the plastic neutral axes halve the area (geometric, independent of E).'
     : method === 'force'
@@ -143,28 +146,37 @@ function weighted(ring: readonly (readonly [number, number])[], origin: readonly
  * strengths swapped (the same when every material is equally strong both ways).
  */
 function plasticAxis(rings: readonly WeightedRing[], nx: number, ny: number, extent: number): { t: number; Mp: number; MpNeg: number } {
-  const side = new Float64Array(3) // [A, Qx, Qy] of one clipped ring
+  const side = new Float64Array(4) // [A, Qx, Qy, chord] of one clipped ring
   const solve = (swap: boolean): { t: number; Mp: number } => {
     let total = 0
+    let weighted = 0
+    let first = 0
     let low = Infinity
     let high = -Infinity
     for (const r of rings) {
       total += (swap ? r.wc : r.wt) * r.A
+      weighted += (r.wc + r.wt) * r.A
+      first += (r.wc + r.wt) * (nx * r.Qy + ny * r.Qx)
       for (let i = 0; i < r.xs.length; i++) {
         const d = nx * r.xs[i]! + ny * r.ys[i]!
         if (d < low) low = d
         if (d > high) high = d
       }
     }
-    const balance = (t: number): number => {
-      let s = 0
+    // f(t) = Σ (wc + wt)·A_below(t) - Σ wt·A rises with t at the rate Σ (wc + wt)·chord(t).
+    const balance = (t: number): [number, number] => {
+      let f = 0
+      let slope = 0
       for (const r of rings) {
         clippedMoments(r.xs, r.ys, t, -nx, -ny, side)
-        s += (r.wc + r.wt) * side[0]!
+        f += (r.wc + r.wt) * side[0]!
+        slope += (r.wc + r.wt) * side[3]!
       }
-      return s - total
+      return [f - total, slope]
     }
-    const t = bracketedRoot(balance, low, high, -total, (rings.reduce((s, r) => s + (r.wc + r.wt) * r.A, 0)) - total, OFFSET_TOLERANCE * extent)
+    // Start at the weighted centroid: for a symmetric section that is the PNA itself.
+    const start = weighted > 0 ? first / weighted : (low + high) / 2
+    const t = safeNewton(balance, low, high, -total, weighted - total, start, OFFSET_TOLERANCE * extent, OFFSET_TOLERANCE * weighted)
     let Mp = 0
     for (const r of rings) {
       clippedMoments(r.xs, r.ys, t, -nx, -ny, side)
@@ -182,24 +194,23 @@ function plasticAxis(rings: readonly WeightedRing[], nx: number, ny: number, ext
 }
 
 /**
- * Root of an increasing function f on [low, high] with f(low) = fLow < 0 < fHigh = f(high):
- * regula falsi with the Illinois modification, falling back to bisection whenever a step fails
- * to halve the bracket; stops when the bracket is narrower than `tolerance`.
+ * Root of an increasing function f on [low, high] (f(low) = fLow < 0 < fHigh = f(high)) by Newton's
+ * method with its slope, kept inside the bracket: a step that leaves it, or a flat stretch (a gap
+ * between parts), falls back to regula falsi with the Illinois step, and to bisection when that
+ * fails to halve the bracket. Stops when a step or the bracket is below `tolerance`, or |f| below `fTolerance`.
+ * Newton from the centroid takes a few passes where the bracketing search alone took many.
  */
-function bracketedRoot(f: (t: number) => number, low: number, high: number, fLow: number, fHigh: number, tolerance: number): number {
+function safeNewton(f: (t: number) => [number, number], low: number, high: number, fLow: number, fHigh: number, start: number, tolerance: number, fTolerance: number): number {
   let lo = low
   let hi = high
   let fLo = fLow
   let fHi = fHigh
+  let t = start > lo && start < hi ? start : (lo + hi) / 2
   let lastMoved = 0
   let previousWidth = Infinity
   for (let i = 0; i < MAX_ITERATIONS && hi - lo > tolerance; i++) {
-    const width = hi - lo
-    let t = width > previousWidth / 2 ? (lo + hi) / 2 : (lo * fHi - hi * fLo) / (fHi - fLo)
-    if (!(t > lo && t < hi)) t = (lo + hi) / 2
-    previousWidth = width
-    const ft = f(t)
-    if (ft === 0) return t
+    const [ft, slope] = f(t)
+    if (Math.abs(ft) <= fTolerance) return t
     if (ft < 0) {
       lo = t
       fLo = ft
@@ -211,13 +222,23 @@ function bracketedRoot(f: (t: number) => number, low: number, high: number, fLow
       if (lastMoved === 1) fLo /= 2
       lastMoved = 1
     }
+    let next = slope > 0 ? t - ft / slope : NaN
+    if (!(next > lo && next < hi)) {
+      const width = hi - lo
+      next = width > previousWidth / 2 ? (lo + hi) / 2 : (lo * fHi - hi * fLo) / (fHi - fLo)
+      if (!(next > lo && next < hi)) next = (lo + hi) / 2
+      previousWidth = width
+    }
+    if (Math.abs(next - t) <= tolerance) return next
+    t = next
   }
   return (lo + hi) / 2
 }
 
 /**
  * Writes into out the signed area A (mm²) and the first moments Qx = ∫y dA, Qy = ∫x dA (mm³, about
- * the shifted origin) of the ring (xs, ys) clipped by a + b·x + c·y >= 0. It is the Sutherland–Hodgman
+ * the shifted origin) of the ring (xs, ys) clipped by a + b·x + c·y >= 0, and (for a unit (b, c)) the
+ * signed length of the line a + b·x + c·y = 0 inside the ring, dA/da (mm). It is the Sutherland–Hodgman
  * walk of clipRingHalfPlane with Green's-theorem sums taken as the output is produced, not stored:
  * the root search calls it many times on rings of up to millions of vertices.
  */
@@ -226,6 +247,7 @@ function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number
   let area = 0
   let momentX = 0
   let momentY = 0
+  let chord = 0
   // The output polygon is walked as it is produced: (lastX, lastY) is its latest vertex.
   let firstX = NaN
   let firstY = NaN
@@ -247,6 +269,8 @@ function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number
         const t = fp / (fp - fq)
         x = px + t * (qx - px)
         y = py + t * (qy - py)
+        // Along the line (s = -c·x + b·y): the kept boundary on it runs between crossings out and in.
+        chord += (keep ? 1 : -1) * (b * y - c * x)
       }
       if (firstX !== firstX) {
         firstX = x
@@ -273,4 +297,5 @@ function clippedMoments(xs: Float64Array, ys: Float64Array, a: number, b: number
   out[0] = area / 2
   out[1] = momentX / 6
   out[2] = momentY / 6
+  out[3] = -chord
 }

@@ -162,3 +162,16 @@ describe('plasticModuli: several materials', () => {
     expectClose(z.x.Z!, z.x.Mp! / 355, 1e-12)
   })
 })
+
+describe('plasticModuli about principal axes that are x and y', () => {
+  it('theta = 90° (a wide plate: major axis vertical): Zu is Zy and Zv is Zx, the senses following the turned normals (closed form hb²/4, bh²/4)', () => {
+    // 150 wide, 60 deep: Iyy > Ixx, so the major axis u is vertical (θ = 90°).
+    const prepared = prepareSection([{ outline: rect(0, 0, 150, 60), material: { E: 200_000, fy: 355 } }])
+    const z = plasticModuli(prepared, 90)
+    expectClose(z.u.Z!, (60 * 150 ** 2) / 4, 1e-12)
+    expectClose(z.v.Z!, (150 * 60 ** 2) / 4, 1e-12)
+    // u's normal is (-1, 0): its PNA is the line -x = offset through the middle, x = 75.
+    expectClose(z.u.offset, -75, 1e-12)
+    expectClose(z.v.offset, 30, 1e-12)
+  })
+})
