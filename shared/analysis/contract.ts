@@ -37,6 +37,8 @@ export const AnalysisRequest = z.object({
     holes: z.array(RingIn).default([]),
     notches: z.array(RingIn).default([]),
     material: AnalysisMaterial.default({ E: 200_000 }),
+    /** The shape the part came from ("ishape", "channel"...), named in its check-table row. */
+    source: z.string().max(80).optional(),
   })).min(1, 'Send at least one part').max(500, 'At most 500 parts'),
   /** Section-wide cuts: openings through every part they overlap (a bolt hole through a flange and its cover plate). */
   cuts: z.array(RingIn).max(500, 'At most 500 cuts').default([]),
@@ -46,6 +48,8 @@ export const AnalysisRequest = z.object({
   /** Length tolerance (mm) within which two part edges count as one contact line for shear flow. */
   contactTolerance: finite('contactTolerance').refine(v => v > 0 && v <= 10, 'contactTolerance lies in (0, 10] mm').optional(),
   noTension: z.boolean().default(false),
+  /** Answer the check table too: a row per part, hole, cut and overlap with its parallel-axis terms. */
+  checkTable: z.boolean().default(false),
   referenceE: finite('referenceE').refine(v => v > 0, 'referenceE must be positive (MPa)').optional(),
   /** K·L (mm): one number about both principal axes, or {u, v} about the major and minor axis. */
   effectiveLength: z.union([

@@ -47,6 +47,7 @@ export function analysisRequestFor(doc: SketchDocument): AnalysisRequestBody | n
       outline: ring(p.outline),
       holes: p.holes.filter(h => h.kind !== 'notch').map(h => ring(h.ring)),
       notches: p.holes.filter(h => h.kind === 'notch').map(h => ring(h.ring)),
+      ...(p.shape ? { source: p.shape.kind } : {}),
       material: {
         name: p.material.name,
         E: p.material.E,

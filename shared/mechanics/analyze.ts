@@ -1,4 +1,5 @@
 import type { Ring } from '../geometry/types'
+import { checkTable, type CheckTable } from './check-table'
 import { connectionShearFlows, type Connection } from './connections'
 import { contactUnderActions } from './contact'
 import { kernPolygon } from './kern'
@@ -22,6 +23,8 @@ export interface AnalysisInput {
   effectiveLength?: EffectiveLengths
   /** Edges within this distance (mm) and collinear are one contact line between parts. */
   contactTolerance?: number
+  /** Also build the check table (rows per part, hole, cut and overlap). */
+  checkTable?: boolean
 }
 
 export interface AnalysisRegionOut {
@@ -47,6 +50,8 @@ export interface AnalysisOutput {
   /** The section-wide cuts and the parts each cuts. */
   cuts: PreparedCut[]
   slenderness: SlendernessResult | null
+  /** The hand tabulation, when asked for. */
+  checkTable?: CheckTable
   vertexCount: number
   warnings: string[]
 }
@@ -87,6 +92,10 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
   if (slender?.warning) warnings.push(slender.warning)
   if (properties.moduliNote) warnings.push(properties.moduliNote)
 
+  const table = input.checkTable
+    ? checkTable(input.parts, input.cuts ?? [], prepared, properties, input.parts.map(p => p.source ?? null))
+    : undefined
+
   let vertexCount = 0
   for (const r of prepared.regions) for (const poly of r.polygons) for (const ring of poly) vertexCount += ring.length
 
@@ -105,6 +114,7 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     connections,
     cuts: [...prepared.cuts],
     slenderness: slender,
+    ...(table ? { checkTable: table } : {}),
     vertexCount,
     warnings,
   }

@@ -29,6 +29,8 @@ export interface PartInput {
   readonly holes?: readonly Ring[]
   readonly notches?: readonly Ring[]
   readonly material?: Material
+  /** The shape the part came from, named in its check-table row. */
+  readonly source?: string
 }
 
 /** A compressive point load: P in N (positive = compression) at (x, y) in mm. */

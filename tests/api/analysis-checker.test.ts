@@ -118,3 +118,24 @@ describe('POST /api/sketches with a schema-1 document', () => {
     expect(r.body.document.parts.map((p: { kind: string }) => p.kind)).toEqual(['solid', 'solid', 'cut'])
   })
 })
+
+describe('POST /api/analysis with checkTable: true', () => {
+  it('answers rows per part, hole and cut and sums equal to the properties (by hand: 200·120 - 40·30 - 2·20·20)', async () => {
+    const r = await c.post('/api/analysis', {
+      parts: [{ name: 'Plate', outline: rect(200, 100), holes: [rect(40, 30, 20, 20)] }, { name: 'Flange', outline: rect(200, 20, 0, 100) }],
+      cuts: [rect(20, 50, 150, 80)],
+      checkTable: true,
+    })
+    expect(r.status).toBe(200)
+    const t = r.body.checkTable
+    expect(t.rows.map((row: { name: string; sign: number }) => [row.name, row.sign])).toEqual([['Plate', 1], ['Plate: hole 1', -1], ['Cut 1 through Plate', -1], ['Flange', 1], ['Cut 1 through Flange', -1]])
+    for (const key of ['name', 'sign', 'n', 'A', 'x', 'y', 'Ax', 'Ay', 'Ixx0', 'Iyy0', 'Ixy0', 'dx', 'dy']) expect(t.rows[0]).toHaveProperty(key)
+    expectClose(t.sums.A, 200 * 120 - 1200 - 800, 1e-12)
+    expectClose(t.sums.Ixx, r.body.properties.Ixx, 1e-12)
+  })
+
+  it('is left out unless asked', async () => {
+    const r = await c.post('/api/analysis', { parts: [{ outline: rect(100, 100) }] })
+    expect(r.body).not.toHaveProperty('checkTable')
+  })
+})
