@@ -1,6 +1,7 @@
 import type { H3Event } from 'h3'
 import { SketchDocumentSchema, migrateDocument, type SketchDocument } from '../../shared/sketch/document'
 import type { Sketch, User } from '../models'
+import { BIN_DAYS } from '../../shared/sketch/api'
 
 /** Parses a stored document, upgrading older schemas on the way. */
 export function readDocument(text: string): SketchDocument {
@@ -36,10 +37,16 @@ function countParts(text: string): number {
   }
 }
 
-/** One of the caller's own (not deleted) sketches, or 404: someone else's sketch does not exist for them. */
+/**
+ * One of the caller's own sketches, or 404: someone else's sketch does not exist for them. Not
+ * deleted by default; with `deleted`, one in the bin for under BIN_DAYS days (older ones are gone).
+ */
 export async function findOwnSketch(event: H3Event, user: User, id: string, { deleted = false } = {}): Promise<Sketch> {
   const db = await useDb()
   const sketch = await db.Sketch.findOne({ where: { id, ownerId: user.id } })
   if (!sketch || (!!sketch.deletedAt !== deleted)) throw createError({ statusCode: 404, message: 'Sketch not found' })
+  if (deleted && sketch.deletedAt!.getTime() < Date.now() - BIN_DAYS * 86_400_000) {
+    throw createError({ statusCode: 404, message: `Sketch not found: it was deleted over ${BIN_DAYS} days ago` })
+  }
   return sketch
 }

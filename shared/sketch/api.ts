@@ -28,8 +28,13 @@ export const UpdateSketchBody = z.object({
   document: Document.optional(),
 })
 
+/** How long a deleted sketch can be restored (days). */
+export const BIN_DAYS = 30
+
 export const ListSketchesQuery = z.object({
   q: z.string().max(160).optional(),
+  /** "true" lists what I deleted in the last BIN_DAYS days instead (newest first). */
+  deleted: z.enum(['true', 'false'], { error: 'deleted is true or false' }).optional(),
   sort: z.enum(['updated', 'created', 'title', 'project'], { error: 'sort is one of: updated, created, title, project' }).default('updated'),
   order: z.enum(['asc', 'desc'], { error: 'order is asc or desc' }).optional(),
 })
@@ -46,6 +51,8 @@ export interface SketchSummary {
   createdAt: string
   updatedAt: string
   partCount: number
+  /** When it was moved to the bin (ISO), in the recently deleted list only. */
+  deletedAt?: string
 }
 
 export interface SketchFull extends SketchSummary {
