@@ -16,40 +16,51 @@ export function useAutosave(delayMs = 800) {
   const savedTitle = ref(sketch.meta?.title ?? '')
   let timer: ReturnType<typeof setTimeout> | null = null
   let saving: Promise<void> | null = null
+  /**
+   * The sketch this autosave writes and the version it last saw, kept here and not read back from
+   * the store: a save still under way when the editor is left (or another sketch is opened) must
+   * finish against its own sketch, and must not give the next sketch its version.
+   */
+  const target = { id: sketch.meta?.id ?? '', version: sketch.meta?.version ?? 0 }
 
   const dirty = computed(() => sketch.revision !== savedRevision.value || (sketch.meta?.title ?? '') !== savedTitle.value)
 
+  /** The state to save, taken at once (the store replaces the document on every edit, so this is a snapshot). */
+  function snapshot() {
+    return { doc: sketch.doc, title: sketch.meta?.title ?? '', revision: sketch.revision, mine: sketch.meta?.id === target.id }
+  }
+
   async function save(): Promise<void> {
-    const meta = sketch.meta
-    if (!meta || status.value === 'conflict' || !dirty.value) return
-    if (saving) { await saving; return save() }
-    const revision = sketch.revision
-    const title = meta.title
+    if (!sketch.meta || status.value === 'conflict' || !dirty.value) return
+    return send(snapshot())
+  }
+
+  /** Saves one snapshot after any save under way (one PATCH at a time, each with the version the last one got). */
+  async function send(snap: ReturnType<typeof snapshot>): Promise<void> {
+    if (!snap.mine || !target.id) return
+    while (saving) await saving
+    if (status.value === 'conflict') return
     status.value = 'saving'
     saving = (async () => {
       try {
-        const body: Record<string, unknown> = { version: meta.version, document: sketch.doc }
-        if (title !== savedTitle.value && title.trim()) body.title = title
-        const saved = await $fetch<SketchFull>(`/api/sketches/${meta.id}`, { method: 'PATCH', body })
-        sketch.setMeta({ version: saved.version, status: saved.status })
-        savedRevision.value = revision
-        savedTitle.value = title
+        const body: Record<string, unknown> = { version: target.version, document: snap.doc }
+        if (snap.title !== savedTitle.value && snap.title.trim()) body.title = snap.title
+        const saved = await $fetch<SketchFull>(`/api/sketches/${target.id}`, { method: 'PATCH', body })
+        target.version = saved.version
+        savedRevision.value = snap.revision
+        savedTitle.value = snap.title
+        if (sketch.meta?.id === target.id) sketch.setMeta({ version: saved.version, status: saved.status })
         message.value = null
         status.value = dirty.value ? 'unsaved' : 'saved'
       } catch (e) {
-        if (errorStatus(e) === 409) {
-          status.value = 'conflict'
-          message.value = errorMessage(e)
-        } else {
-          status.value = 'error'
-          message.value = errorMessage(e)
-        }
+        status.value = errorStatus(e) === 409 ? 'conflict' : 'error'
+        message.value = errorMessage(e)
       } finally {
         saving = null
       }
     })()
     await saving
-    if (status.value === 'unsaved') schedule()
+    if (status.value === 'unsaved' && sketch.meta?.id === target.id) schedule()
   }
 
   function schedule(): void {
@@ -65,6 +76,7 @@ export function useAutosave(delayMs = 800) {
     if (!meta) return
     const fresh = await $fetch<SketchFull>(`/api/sketches/${meta.id}`)
     sketch.load(fresh)
+    target.version = fresh.version
     savedRevision.value = sketch.revision
     savedTitle.value = fresh.title
     status.value = 'saved'
@@ -85,6 +97,8 @@ export function useAutosave(delayMs = 800) {
 
   /** Called after `sketch.load()`: the loaded state counts as saved. */
   function markLoaded(): void {
+    target.id = sketch.meta?.id ?? ''
+    target.version = sketch.meta?.version ?? 0
     savedRevision.value = sketch.revision
     savedTitle.value = sketch.meta?.title ?? ''
     status.value = 'saved'
@@ -99,8 +113,10 @@ export function useAutosave(delayMs = 800) {
   onMounted(() => window.addEventListener('beforeunload', beforeUnload))
   onBeforeUnmount(() => {
     window.removeEventListener('beforeunload', beforeUnload)
-    // Leaving the editor flushes a pending save rather than dropping it.
-    if (timer) { clearTimeout(timer); timer = null; void save() }
+    // Leaving the editor saves what is not saved yet, now, as a snapshot: not only when a save was
+    // scheduled (a change committed while leaving has no timer yet) and after any save under way.
+    if (timer) { clearTimeout(timer); timer = null }
+    if (dirty.value && status.value !== 'conflict') void send(snapshot())
   })
 
   return { status, message, dirty, save, reloadTheirs, keepMineAsCopy, markLoaded }

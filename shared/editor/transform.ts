@@ -73,3 +73,14 @@ export function rectangleRing(a: Point, b: Point): XY[] {
   const y1 = Math.max(a[1], b[1])
   return [[x0, y0], [x1, y0], [x1, y1], [x0, y1]]
 }
+
+/** What Fit shows (mm): the parts' bounds grown to take in every load point; null when there is nothing. */
+export function fitBounds(parts: Bounds | null, loads: readonly { x: number; y: number }[]): Bounds | null {
+  let b = parts
+  for (const l of loads) {
+    b = b
+      ? { minX: Math.min(b.minX, l.x), minY: Math.min(b.minY, l.y), maxX: Math.max(b.maxX, l.x), maxY: Math.max(b.maxY, l.y) }
+      : { minX: l.x, minY: l.y, maxX: l.x, maxY: l.y }
+  }
+  return b
+}

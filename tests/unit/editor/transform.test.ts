@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { ringArea } from '#shared/geometry/moments'
-import { deleteVertex, insertVertex, mirrorRing, orientRing, rectangleRing, ringsBounds, rotateRing, setVertex, translateRing } from '#shared/editor/transform'
+import { deleteVertex, fitBounds, insertVertex, mirrorRing, orientRing, rectangleRing, ringsBounds, rotateRing, setVertex, translateRing } from '#shared/editor/transform'
 import { angleDeg, roundAngle } from '#shared/editor/gesture'
 
 const sq = rectangleRing([0, 0], [20, 10])
@@ -55,5 +55,15 @@ describe('transforms', () => {
     expect(roundAngle(44.6, 1)).toBe(45)
     expect(roundAngle(52, 15)).toBe(45)
     expect(roundAngle(-190, 1)).toBe(170)
+  })
+})
+
+describe('fitBounds', () => {
+  it('grows the parts\' bounds to take in every load point (by hand)', () => {
+    expect(fitBounds({ minX: 0, minY: 0, maxX: 100, maxY: 50 }, [{ x: 150, y: 20 }, { x: -10, y: -40 }])).toEqual({ minX: -10, minY: -40, maxX: 150, maxY: 50 })
+  })
+  it('is the loads alone without parts, and null with neither', () => {
+    expect(fitBounds(null, [{ x: 5, y: 6 }])).toEqual({ minX: 5, minY: 6, maxX: 5, maxY: 6 })
+    expect(fitBounds(null, [])).toBeNull()
   })
 })

@@ -1,0 +1,62 @@
+import { expect, test, type Page } from '@playwright/test'
+import { open, signIn } from './support/helpers'
+
+/** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
+async function transform(page: Page) {
+  const canvas = page.getByTestId('sketch-canvas')
+  const box = (await canvas.boundingBox())!
+  const zoom = Number(await canvas.getAttribute('data-zoom'))
+  const panX = Number(await canvas.getAttribute('data-pan-x'))
+  const panY = Number(await canvas.getAttribute('data-pan-y'))
+  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
+}
+
+async function outline(page: Page, points: readonly (readonly [number, number])[]): Promise<void> {
+  const at = await transform(page)
+  await page.getByTestId('tool-outline').click()
+  for (const [x, y] of points) await page.mouse.click(at(x, y).x, at(x, y).y)
+  await page.keyboard.press('Enter')
+}
+
+test('a change made while a save is under way, then opening another sketch at once, is saved to its own sketch: a self-crossing outline is kept as drawn', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  const { id } = await (await page.request.post('/api/sketches', { data: { title: 'Leave at once' } })).json()
+  await open(page, `/sketches/${id}`)
+  await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
+  // Every save of this sketch takes 3 s, so the next change lands while one is under way.
+  let patches = 0
+  await page.route(`**/api/sketches/${id}`, async (route) => {
+    if (route.request().method() === 'PATCH') {
+      patches++
+      await new Promise(resolve => setTimeout(resolve, 3000))
+    }
+    await route.continue()
+  })
+  await outline(page, [[0, 0], [100, 0], [100, 50], [0, 50]])
+  await expect(page.getByTestId('save-indicator')).toHaveAttribute('data-status', 'saving')
+  // A bow-tie (it crosses itself: flagged, but kept as drawn), then straight back to the dashboard.
+  await outline(page, [[-50, -150], [50, -250], [50, -150], [-50, -250]])
+  await expect(page.getByTestId('analysis-error')).toBeVisible()
+  await page.getByRole('link', { name: 'Back to sketches' }).click()
+  await page.getByTestId('sketch-list').getByRole('link', { name: 'Crane column C3' }).click()
+  await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'ready')
+  const crane = page.url().split('/').pop()!
+  const craneBefore = await (await page.request.get(`/api/sketches/${crane}`)).json()
+  await expect.poll(() => patches, { timeout: 10_000 }).toBe(2)
+  await expect.poll(async () => (await (await page.request.get(`/api/sketches/${id}`)).json()).document.parts.length, { timeout: 10_000 }).toBe(2)
+  const stored = await (await page.request.get(`/api/sketches/${id}`)).json()
+  const sorted = (ring: number[][]) => ring.map(p => p.join(',')).sort()
+  expect(sorted(stored.document.parts[1].outline)).toEqual(sorted([[-50, -150], [50, -250], [50, -150], [-50, -250]]))
+  // The sketch opened meanwhile was not written over, and it still saves without a false conflict.
+  const craneAfter = await (await page.request.get(`/api/sketches/${crane}`)).json()
+  expect(craneAfter.version).toBe(craneBefore.version)
+  expect(craneAfter.document.parts.length).toBe(craneBefore.document.parts.length)
+  await page.getByTestId('sketch-title').fill('Crane column C3 (renamed)')
+  await page.getByTestId('sketch-title').press('Enter')
+  await expect(page.getByTestId('save-indicator')).toHaveAttribute('data-status', 'saved', { timeout: 10_000 })
+  await expect(page.getByTestId('save-conflict')).toHaveCount(0)
+  // Opened again at once: both parts are there.
+  await page.unroute(`**/api/sketches/${id}`)
+  await open(page, `/sketches/${id}`)
+  await expect(page.getByTestId('analysis-error')).toBeVisible()
+})
