@@ -1,5 +1,6 @@
 import { ringsBounds } from '#shared/geometry/bounds'
 import type { Bounds } from '#shared/geometry/types'
+import { pointInRing } from '#shared/editor/hit'
 import { envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient } from '#shared/stress/field'
 import { formatNumber, formatStress, STRESS_COLOURS } from '#shared/stress/scale'
 import { emptyScene, type StressScene } from './useStressPaint'
@@ -53,7 +54,9 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
       const thresholds = [lo, ...isolineValues(lo, hi, 8, u.stress.perMPa), 0].filter((v, i, a) => a.indexOf(v) === i && v >= lo && v <= hi).sort((p, q) => p - q)
       const worstC = f.clampAbove === 0 || view.envelopeSide.value === 'compression'
       for (const r of regions) {
-        const env = envelopeBands(ringsBounds(r.rings) ?? EMPTY_BOX, r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y], undefined, f.clampAbove)
+        // Even-odd over the region's rings: inside its material, not in a void.
+        const inMaterial = (x: number, y: number) => r.rings.reduce((odd, ring) => (pointInRing([x, y], ring) ? !odd : odd), false)
+        const env = envelopeBands(ringsBounds(r.rings) ?? EMPTY_BOX, r.n, f.planes, worstC, thresholds, scale, [sec.props.centroid.x, sec.props.centroid.y], undefined, f.clampAbove, inMaterial)
         s.envelope.push({ rings: r.rings, base: env.base, bands: env.bands })
         for (const l of env.labels) s.labels.push({ x: l.x, y: l.y, text: formatStress(l.value, u), dx: 3, dy: -3, size: 10 })
       }

@@ -251,6 +251,7 @@ export interface EnvelopeBandsOut {
  * Each band is filled with the colour of its middle value; a label point is chosen per threshold on the
  * band's edge, inside the bounds, nearest the point `near` (mm). Values above `clampAbove` are held
  * there (0 for a no-tension envelope: where every set lifts off the pressure is 0, never tension).
+ * A label point must also satisfy `inside` (the region's material, so a label never sits in a void).
  */
 export function envelopeBands(
   bounds: Bounds,
@@ -262,6 +263,7 @@ export function envelopeBands(
   near: readonly [number, number],
   cells = 3600,
   clampAbove = Infinity,
+  inside: (x: number, y: number) => boolean = () => true,
 ): EnvelopeBandsOut {
   const grid = sampleGrid(bounds, cells, (x, y) => {
     let lo = Infinity
@@ -289,6 +291,7 @@ export function envelopeBands(
         const x = ring[j]!
         const y = ring[j + 1]!
         if (Math.abs(x - bounds.minX) < eps || Math.abs(x - bounds.maxX) < eps || Math.abs(y - bounds.minY) < eps || Math.abs(y - bounds.maxY) < eps) continue
+        if (!inside(x, y)) continue
         const d = Math.hypot(x - near[0], (y - near[1]) * 3)
         if (d < bestD) {
           bestD = d

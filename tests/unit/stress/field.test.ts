@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import type { Ring } from '../../../shared/geometry/types'
-import { contourBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, niceStep, planeGradient, sampleGrid } from '../../../shared/stress/field'
+import { contourBands, envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, niceStep, planeGradient, sampleGrid } from '../../../shared/stress/field'
 import { cutLineProfile } from '../../../shared/stress/cutline'
 import { stressScale } from '../../../shared/stress/scale'
 import { expectClose } from '../../support/expect-close'
@@ -112,5 +112,19 @@ describe('cutLineProfile', () => {
     expect(prof.pieces[0]!.s[0]).toBe(0)
     expect(prof.pieces[0]!.s.at(-1)).toBeCloseTo(300, 9)
     expect(prof.pieces[0]!.v).toHaveLength(11)
+  })
+})
+
+describe('envelopeBands labels', () => {
+  it('never puts a label where `inside` says there is no material (a void)', () => {
+    // Two planes varying with x over a 200 x 100 box; the middle 100 x 60 is a void.
+    const planes = [{ a: -10, b: 0.05, c: 0 }, { a: -12, b: 0.02, c: 0.01 }]
+    const bounds = { minX: 0, minY: 0, maxX: 200, maxY: 100 }
+    const inVoid = (x: number, y: number) => x > 50 && x < 150 && y > 20 && y < 80
+    const open = envelopeBands(bounds, 1, planes, true, [-12, -10, -8, -6, -4, -2], () => '#000', [100, 50])
+    const held = envelopeBands(bounds, 1, planes, true, [-12, -10, -8, -6, -4, -2], () => '#000', [100, 50], 3600, Infinity, (x, y) => !inVoid(x, y))
+    expect(open.labels.some(l => inVoid(l.x, l.y))).toBe(true) // without the test, labels fall in the void (near its centre)
+    expect(held.labels.length).toBeGreaterThan(0)
+    expect(held.labels.some(l => inVoid(l.x, l.y))).toBe(false)
   })
 })
