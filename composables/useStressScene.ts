@@ -63,6 +63,10 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
     }
 
     const c = sec.props.centroid
+    // A material pressed past its compression or bearing strength is flagged where it is pressed most.
+    for (const b of f.bearing) {
+      if (b.ratio > 1) s.labels.push({ x: b.x, y: b.y, text: `over ${b.name} strength: ${Math.round(b.ratio * 100)} %`, dx: -8, dy: 16, colour: '#95222a', weight: 'bold', align: 'right' })
+    }
     if (contact && f.contact?.status === 'overturning') {
       s.labels.push({ x: c.x, y: c.y, text: 'Overturning: the resultant is outside the base', dx: 0, dy: -40, colour: '#95222a', weight: 'bold', size: 14, align: 'center' })
       s.labels.push({ x: c.x, y: c.y, text: 'no equilibrium exists without tension', dx: 0, dy: -22, colour: '#95222a', size: 12, align: 'center' })

@@ -68,7 +68,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
       const allowable = materials.find(m => m[0] === r.name && m[1] === r.E)?.[2] ?? null
       // markRaw: vue-konva deep-watches and stores its configs reactively; big vertex arrays must stay plain.
       const rings: Ring[] = markRaw(r.polygons.flat().map(ring => markRaw(ring as Ring[number][]) as Ring))
-      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, allowable }
+      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, fc: r.fc ?? null, allowable }
     })
     const hull = markRaw(regionsHull(a.regions)) as Ring
     // The live analysis leaves the core out of the answer (`omit`): the same function the server runs gives it here.

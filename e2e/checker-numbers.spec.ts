@@ -101,3 +101,15 @@ test('Canopy strut S5: principal moduli and the note that M/S about x is not the
   await page.getByTestId('prop-group-strength').scrollIntoViewIfNeeded()
   await shot(page, 'checker-s5-moduli')
 })
+
+test('Pad footing F4: the peak pressure is checked against the soil\'s bearing strength, flagged in the panel and on the drawing', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  await openDemo(page, 'Pad footing F4')
+  await expect(page.getByTestId('contact-panel')).toHaveAttribute('data-status', 'partial')
+  const row = page.getByTestId('bearing-checks').locator('li').first()
+  await expect(row).toHaveAttribute('data-over', 'true')
+  await expect(row).toContainText('over what it can bear')
+  await expect(page.getByTestId('analysis-warnings')).toContainText('bearing strength 0.2 MPa')
+  await page.getByTestId('panel-contact').scrollIntoViewIfNeeded()
+  await shot(page, 'checker-f4-bearing')
+})

@@ -15,7 +15,7 @@ type Xy = [number, number]
 const kN = 1000
 
 function material(p: MaterialPreset): SketchPart['material'] {
-  return { name: p.name, E: p.E, ...(p.fy ? { fy: p.fy } : {}), density: p.density, ...(p.noTension ? { noTension: true } : {}) }
+  return { name: p.name, E: p.E, ...(p.fy ? { fy: p.fy } : {}), ...(p.fc ? { fc: p.fc } : {}), density: p.density, ...(p.noTension ? { noTension: true } : {}) }
 }
 
 function part(id: string, name: string, g: ShapeGeometry, mat: MaterialPreset, shape: SketchPart['shape'] = null, dx = 0, dy = 0): SketchPart {
@@ -97,9 +97,12 @@ function brickPier(): SketchDocument {
   return doc([pier], [{ name: 'Beam bearing', P: 150 * kN, x: 0, y: 90 }], {}, { noTension: true })
 }
 
-/** 4. A 1800 × 2400 pad on soil with 900 kN at (250, 350): outside the core, partial contact. */
+/**
+ * 4. A 1800 × 2400 pad on soil with 900 kN at (250, 350): outside the core, partial contact. The
+ * section is the pad's base on the ground, so its material is the soil with its bearing pressure.
+ */
 function padFooting(): SketchDocument {
-  const pad = part('f4-pad', 'Pad 1800 × 2400', SHAPES.plate.build({ b: 1800, h: 2400 }), MATERIAL_PRESETS.concrete, { kind: 'plate', params: { b: 1800, h: 2400 } })
+  const pad = part('f4-pad', 'Base of pad 1800 × 2400', SHAPES.plate.build({ b: 1800, h: 2400 }), MATERIAL_PRESETS.soil, { kind: 'plate', params: { b: 1800, h: 2400 } })
   return doc([pad], [{ name: 'Column', P: 900 * kN, x: 250, y: 350 }], {}, { noTension: true, gridMm: 50 })
 }
 

@@ -1,7 +1,7 @@
 import type { Ring } from '../geometry/types'
 import { checkTable, type CheckTable } from './check-table'
 import { connectionShearFlows, type Connection } from './connections'
-import { contactUnderActions } from './contact'
+import { bearingChecks, bearingWarning, contactUnderActions } from './contact'
 import { kernPolygon } from './kern'
 import { materialKey, prepareSection } from './prepare'
 import { sectionProperties } from './properties'
@@ -32,6 +32,8 @@ export interface AnalysisRegionOut {
   E: number
   n: number
   fy: number | null
+  /** Compression or bearing strength (MPa), checked against the no-tension pressure. */
+  fc: number | null
   polygons: Ring[][]
 }
 
@@ -75,7 +77,15 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
   const stress = hasActions ? sectionStress(properties, hull, regions, loads, moments) : null
 
   let contact: ContactResult | undefined
-  if (input.noTension) contact = contactUnderActions(properties, regions, hull, loads, moments)
+  if (input.noTension) {
+    contact = contactUnderActions(properties, regions, hull, loads, moments)
+    const bearing = bearingChecks(contact, prepared.regions.map(r => ({ name: r.material.name ?? 'Material', n: r.n, rings: r.polygons.flat(), fc: r.material.fc ?? null })))
+    contact = { ...contact, bearing }
+    for (const check of bearing) {
+      const w = bearingWarning(check)
+      if (w) warnings.push(w)
+    }
+  }
 
   const Vx = input.shear?.Vx ?? 0
   const Vy = input.shear?.Vy ?? 0
@@ -107,6 +117,7 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
       E: r.material.E,
       n: r.n,
       fy: r.material.fy ?? null,
+      fc: r.material.fc ?? null,
       polygons: r.polygons as Ring[][],
     })),
     stress,

@@ -2,7 +2,7 @@ import { clipRingHalfPlane } from '../geometry/clip'
 import { addRingMoments, ringArea, zeroMoments } from '../geometry/moments'
 import type { Moments } from '../geometry/moments'
 import type { Point, Polygon, Ring } from '../geometry/types'
-import type { AppliedMoments, ContactResult, PointLoad, StressPoint } from './types'
+import type { AppliedMoments, BearingCheck, ContactResult, PointLoad, StressPoint } from './types'
 import { resultantActions, type InertiaLike } from './stress'
 
 /** One material region for {@link solveContact}: n = E / E_ref (1 for a single material) and its polygons (mm). */
@@ -313,4 +313,44 @@ function hullRadius(hull: Ring, ox: number, oy: number): number {
 
 function shift(ring: Ring, ox: number, oy: number): Point[] {
   return ring.map((p) => [p[0] - ox, p[1] - oy] as const)
+}
+
+/** A region for {@link bearingChecks}: its name, n = E / E_ref, rings (mm) and compression or bearing strength fc (MPa) or null. */
+export interface BearingRegion {
+  readonly name: string
+  readonly n: number
+  readonly rings: readonly Ring[]
+  readonly fc: number | null
+}
+
+/**
+ * The no-tension pressure of each material with a compression or bearing strength fc, against it:
+ * n·q at its most pressed vertex (README "Method", no-tension contact). Empty for no contact or no fc.
+ */
+export function bearingChecks(contact: ContactResult, regions: readonly BearingRegion[]): BearingCheck[] {
+  const q = contact.plane
+  if (!q) return []
+  const out: BearingCheck[] = []
+  for (const region of regions) {
+    if (typeof region.fc !== 'number' || !(region.fc > 0)) continue
+    let peak = 0
+    let at: Point = [0, 0]
+    for (const ring of region.rings) {
+      for (const p of ring) {
+        const v = region.n * (q.a + q.b * p[0] + q.c * p[1])
+        if (v > peak) {
+          peak = v
+          at = p
+        }
+      }
+    }
+    out.push({ name: region.name, peak, x: at[0], y: at[1], strength: region.fc, ratio: peak / region.fc })
+  }
+  return out
+}
+
+/** The warning for a material pressed past its strength, or null. */
+export function bearingWarning(check: BearingCheck): string | null {
+  if (!(check.ratio > 1)) return null
+  return `The contact pressure on ${check.name} reaches ${Number(check.peak.toPrecision(3))} MPa at (${Number(check.x.toPrecision(6))}, ${Number(check.y.toPrecision(6))}) mm, ${Math.round(check.ratio * 100)} % of its compression or bearing strength ${check.strength} MPa.`
 }

@@ -16,7 +16,7 @@ export interface MaterialPreset extends Material {
 }
 
 /** Keys of MATERIAL_PRESETS. */
-export type MaterialPresetKey = 'steel' | 'aluminium' | 'timber' | 'concrete' | 'masonry'
+export type MaterialPresetKey = 'steel' | 'aluminium' | 'timber' | 'concrete' | 'masonry' | 'soil'
 
 /**
  * Typical material values (E and fy in MPa, density kg/m³), labelled as typical: the user must
@@ -63,24 +63,41 @@ export const MATERIAL_PRESETS: { readonly [K in MaterialPresetKey]: MaterialPres
     key: 'concrete',
     name: 'Concrete',
     E: 30_000,
+    fc: 30,
     density: 2400,
     noTension: true,
     note: 'Normal-weight concrete of about C30 strength, short-term modulus, no tensile strength (typical, check the mix).',
     source:
       'E ≈ 30 000 MPa: a typical short-term value for normal-weight concrete of about 30 MPa strength ' +
       '(EN 1992-1-1 Table 3.1 gives Ecm = 33 000 MPa for C30/37; ACI 318 gives 4700·√f′c ≈ 25 700 MPa for f′c = 30 MPa); ' +
-      'long-term (creep) values are much lower. Density 2400 kg/m³ plain, about 2500 reinforced (EN 1991-1-1 Table A.1).',
+      'long-term (creep) values are much lower. fc = 30 MPa: the characteristic cylinder strength fck of C30/37 (EN 1992-1-1 Table 3.1), ' +
+      'unfactored. Density 2400 kg/m³ plain, about 2500 reinforced (EN 1991-1-1 Table A.1).',
   },
   masonry: {
     key: 'masonry',
     name: 'Masonry',
     E: 5_000,
+    fc: 5,
     density: 1900,
     noTension: true,
     note: 'Clay brick in mortar; E varies widely with unit and mortar, no tensile strength (typical, check the product data).',
     source:
       'E ≈ 5 000 MPa: EN 1996-1-1 suggests a short-term E of about 1000·fk, here for fk ≈ 5 MPa; real walls range from ' +
-      'about 2 000 to 15 000 MPa. Density ≈ 1900 kg/m³: typical for solid clay brickwork.',
+      'about 2 000 to 15 000 MPa. fc ≈ 5 MPa: a typical characteristic compressive strength fk of clay brickwork in ' +
+      'general-purpose mortar (EN 1996-1-1 §3.6.1), unfactored. Density ≈ 1900 kg/m³: typical for solid clay brickwork.',
+  },
+  soil: {
+    key: 'soil',
+    name: 'Soil under a footing',
+    E: 50,
+    fc: 0.2,
+    density: 1900,
+    noTension: true,
+    note: 'The ground under a pad: no tension, fc an allowable bearing pressure of 200 kPa (typical, check the site investigation).',
+    source:
+      'fc = 0.2 MPa (200 kPa): a presumed allowable bearing value of the order given for medium-dense sand or firm clay in ' +
+      'common practice (BS 8004 tables of presumed bearing values); the real value comes from the geotechnical report. ' +
+      'E = 50 MPa: a typical order of magnitude for a firm soil; it does not change a single-material contact result.',
   },
 }
 
@@ -91,4 +108,5 @@ export const MATERIAL_PRESET_LIST: readonly MaterialPreset[] = [
   MATERIAL_PRESETS.timber,
   MATERIAL_PRESETS.concrete,
   MATERIAL_PRESETS.masonry,
+  MATERIAL_PRESETS.soil,
 ]

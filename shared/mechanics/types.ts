@@ -188,6 +188,20 @@ export interface ContactResult {
   iterations: number
   converged: boolean
   message: string
+  /** Per material with a compression or bearing strength: its peak pressure against it (server answer). */
+  bearing?: BearingCheck[]
+}
+
+/** The peak contact pressure of one material against its strength (MPa, compression-positive). */
+export interface BearingCheck {
+  name: string
+  /** Highest pressure on this material and where (the plane's maximum lies on a vertex). */
+  peak: number
+  x: number
+  y: number
+  strength: number
+  /** peak / strength (-): over 1 the pressure exceeds what the material can bear. */
+  ratio: number
 }
 
 /** A geometry or input problem that names where it is. */

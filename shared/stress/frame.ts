@@ -1,9 +1,9 @@
 import { ringExtent } from '../geometry/bounds'
 import type { Line, Ring } from '../geometry/types'
 import { envelopeExtremes, type LoadSet } from '../loads/combine'
-import { contactUnderActions, type ContactRegion } from '../mechanics/contact'
+import { bearingChecks, contactUnderActions, type ContactRegion } from '../mechanics/contact'
 import { inKern, kernMargin, neutralAxis, planeExtremes, resultantActions, stressPlane, tensionOnset, type InertiaLike, type TensionOnset } from '../mechanics/stress'
-import type { ContactResult, StressPlane, StressPoint } from '../mechanics/types'
+import type { BearingCheck, ContactResult, StressPlane, StressPoint } from '../mechanics/types'
 import { lineInRings } from './field'
 
 /** A material region as the view draws it: n = E / E_ref and all its rings flattened (mm). */
@@ -11,6 +11,8 @@ export interface FrameRegion {
   readonly name: string
   readonly n: number
   readonly rings: readonly Ring[]
+  /** Compression or bearing strength (MPa) the no-tension pressure is checked against, if known. */
+  readonly fc?: number | null
 }
 
 /** What one evaluation needs: properties (mm, mm², mm⁴), hull and core (mm), regions and the load sets. */
@@ -63,9 +65,11 @@ export interface StressFrame {
   governs: { min: number | null; max: number | null }
   /** Values above this are held there when drawn and checked: 0 for a no-tension view, else Infinity. */
   clampAbove: number
+  /** No-tension: each material's peak pressure against its compression or bearing strength (the worst set in an envelope). */
+  bearing: BearingCheck[]
 }
 
-const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1, overturning: [], governs: { min: null, max: null }, clampAbove: Infinity }
+const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1, overturning: [], governs: { min: null, max: null }, clampAbove: Infinity, bearing: [] }
 const scratchSeg: number[] = []
 const scratchT: number[] = []
 
@@ -112,6 +116,7 @@ export function evaluateFrame(input: FrameInput, dir: readonly [number, number] 
       contact,
       limit: peak ? Math.max(peak.value, 1e-9) : 1,
       clampAbove: 0,
+      bearing: bearingChecks(contact, regions.map(r => ({ name: r.name, n: r.n, rings: r.rings, fc: r.fc ?? null }))),
     }
   }
   if (contactRegions) return contactEnvelope(input, contactRegions)
@@ -165,19 +170,26 @@ function contactEnvelope(input: FrameInput, regions: readonly ContactRegion[]): 
   const planes: StressPlane[] = []
   const setOf: number[] = []
   const overturning: number[] = []
+  const worst = new Map<string, BearingCheck>()
+  const bearingRegions = input.regions.map(r => ({ name: r.name, n: r.n, rings: r.rings, fc: r.fc ?? null }))
   input.sets.forEach((set, k) => {
-    const q = contactUnderActions(input.props, regions, input.hull, set.loads, set.moments).plane
+    const contact = contactUnderActions(input.props, regions, input.hull, set.loads, set.moments)
+    const q = contact.plane
     if (q === null) overturning.push(k)
     else {
       planes.push({ a: -q.a, b: -q.b, c: -q.c })
       setOf.push(k)
+      for (const check of bearingChecks(contact, bearingRegions)) {
+        const previous = worst.get(check.name)
+        if (!previous || check.ratio > previous.ratio) worst.set(check.name, check)
+      }
     }
   })
   const { min, governs } = extremesOver(input.regions, input.hull, planes)
   const compressive = min !== null && min.value < 0 ? min : null
   const limit = Math.max(Math.abs(compressive?.value ?? 0), 1e-9)
   const governing = compressive && governs.min !== null ? setOf[governs.min]! : null
-  return { ...EMPTY, kind: 'envelope', planes, min: compressive, max: null, limit, overturning, governs: { min: governing, max: null }, clampAbove: 0 }
+  return { ...EMPTY, kind: 'envelope', planes, min: compressive, max: null, limit, overturning, governs: { min: governing, max: null }, clampAbove: 0, bearing: [...worst.values()] }
 }
 
 function kernState(input: FrameInput, act: ReturnType<typeof resultantActions>, dir: readonly [number, number]): Pick<StressFrame, 'inKern' | 'margin' | 'onset'> {

@@ -90,3 +90,26 @@ describe('the no-tension envelope is of the contact pressures', () => {
     expectClose(-f.min!.value, 1, 1e-9) // P/A = 1 MPa from case A
   })
 })
+
+describe('no-tension pressure against the material\'s compression or bearing strength', () => {
+  // Pad 1000 x 1000 on soil of bearing strength 0.2 MPa; P = 1000 kN at e = 300 mm: q_max = 3.33 MPa (standard footing result).
+  const input: AnalysisInput = { parts: [{ outline: rect(1000, 1000), material: { name: 'Soil', E: 50, fc: 0.2 } }], loads: [{ P: 1e6, x: 0, y: 300 }], noTension: true }
+
+  it('the answer gives the peak against fc and warns when it is exceeded (3.33 / 0.2 = 1667 %)', () => {
+    const a = analyseSection(input)
+    const b = a.contact!.bearing!
+    expect(b).toHaveLength(1)
+    expectClose(b[0]!.peak, 2e6 / (3 * 1000 * 200), 1e-9)
+    expectClose(b[0]!.ratio, 2e6 / (3 * 1000 * 200) / 0.2, 1e-9)
+    expect(a.warnings.some(w => /reaches 3\.33 MPa .* 1667 % of its compression or bearing strength 0\.2 MPa/.test(w))).toBe(true)
+  })
+
+  it('the editor\'s frame gives the same check; within strength there is no warning', () => {
+    const a = analyseSection(input)
+    const f = evaluateFrame({ ...frameInput(input, [setOf(input.loads as { P: number; x: number; y: number }[])]), regions: a.regions.map(r => ({ name: r.name, n: r.n, rings: r.polygons.flat(), fc: r.fc })) })
+    expectClose(f.bearing[0]!.ratio, a.contact!.bearing![0]!.ratio, 1e-9)
+    const strong = analyseSection({ ...input, parts: [{ outline: rect(1000, 1000), material: { name: 'Rock', E: 50, fc: 10 } }] })
+    expect(strong.contact!.bearing![0]!.ratio).toBeLessThan(1)
+    expect(strong.warnings.some(w => /bearing strength/.test(w))).toBe(false)
+  })
+})

@@ -3,9 +3,9 @@ import { MATERIAL_PRESET_LIST, MATERIAL_PRESETS } from '../../../shared/mechanic
 import { DEFAULT_MATERIAL } from '../../../shared/mechanics/types'
 
 describe('MATERIAL_PRESETS', () => {
-  it('lists steel, aluminium, timber, concrete and masonry, in that display order', () => {
-    expect(Object.keys(MATERIAL_PRESETS)).toEqual(['steel', 'aluminium', 'timber', 'concrete', 'masonry'])
-    expect(MATERIAL_PRESET_LIST.map((m) => m.key)).toEqual(['steel', 'aluminium', 'timber', 'concrete', 'masonry'])
+  it('lists steel, aluminium, timber, concrete, masonry and soil under a footing, in that display order', () => {
+    expect(Object.keys(MATERIAL_PRESETS)).toEqual(['steel', 'aluminium', 'timber', 'concrete', 'masonry', 'soil'])
+    expect(MATERIAL_PRESET_LIST.map((m) => m.key)).toEqual(['steel', 'aluminium', 'timber', 'concrete', 'masonry', 'soil'])
     for (const [key, m] of Object.entries(MATERIAL_PRESETS)) expect(m.key).toBe(key)
   })
 
