@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { expectClose } from '../../support/expect-close'
 import { parseNumber, parseQuantity, type FieldSpec } from '#shared/format/parse'
 import { formatForInput } from '#shared/format/number'
+import { UNITS } from '#shared/format/units'
 import { toDisplay, unitLabel, type Quantity, type UnitPrefs } from '#shared/editor/units'
 
 const value = (text: string, spec: FieldSpec): number => {
@@ -104,6 +105,21 @@ describe('what the UI shows can be typed back (format, then parse)', () => {
           expect(formatForInput(toDisplay(back, q, p))).toBe(shown)
           // with the unit suffix as the property panel writes it
           expectClose(value(`${shown} ${unit}`, { kind: q, unit }), back, 1e-12, 1e-12)
+        }
+      })
+    }
+  }
+})
+
+describe('every unit a field may show reads back in its own field and in a field of another unit of its kind', () => {
+  for (const kind of Object.keys(UNITS) as (keyof typeof UNITS)[]) {
+    for (const u of UNITS[kind]) {
+      it(`${kind}: ${u.label}`, () => {
+        for (const v of [1, -2.5, 1234.5678, 7.5e8]) {
+          const shown = formatForInput(v / u.factor)
+          expectClose(value(shown, { kind, unit: u.label }), v, 5e-6)
+          // the same text with its unit typed into a field of the kind's model unit
+          expectClose(value(`${shown} ${u.label}`, { kind, unit: UNITS[kind][0]!.label }), v, 5e-6)
         }
       })
     }
