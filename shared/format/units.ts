@@ -28,6 +28,8 @@ export interface UnitDef {
   readonly label: string
   readonly aliases?: readonly string[]
   readonly factor: number
+  /** Only its exact case is accepted: mN (millinewton) is not MN. */
+  readonly exactCase?: boolean
 }
 
 const len = (label: string, mm: number, power: 1 | 2 | 3 | 4): UnitDef => {
@@ -41,9 +43,9 @@ export const UNITS: Record<UnitKind, readonly UnitDef[]> = {
   area: [len('mm', 1, 2), len('cm', 10, 2), len('m', 1000, 2), len('in', MM_PER_IN, 2), len('ft', MM_PER_FT, 2)],
   modulus: [len('mm', 1, 3), len('cm', 10, 3), len('m', 1000, 3), len('in', MM_PER_IN, 3)],
   inertia: [len('mm', 1, 4), len('cm', 10, 4), len('m', 1000, 4), len('in', MM_PER_IN, 4)],
-  force: [{ label: 'N', factor: 1 }, { label: 'kN', factor: 1e3 }, { label: 'MN', factor: 1e6 }, { label: 'kip', aliases: ['kips', 'k'], factor: N_PER_KIP }, { label: 'lbf', aliases: ['lb'], factor: N_PER_LBF }],
+  force: [{ label: 'N', factor: 1 }, { label: 'kN', factor: 1e3 }, { label: 'MN', factor: 1e6, exactCase: true }, { label: 'kip', aliases: ['kips'], factor: N_PER_KIP }, { label: 'lbf', aliases: ['lb'], factor: N_PER_LBF }],
   stress: [{ label: 'MPa', aliases: ['N/mm²', 'N/mm2', 'N/mm^2'], factor: 1 }, { label: 'kPa', factor: 1e-3 }, { label: 'Pa', factor: 1e-6 }, { label: 'GPa', aliases: ['kN/mm²', 'kN/mm2'], factor: 1e3 }, { label: 'ksi', factor: MPA_PER_KSI }, { label: 'psi', factor: MPA_PER_KSI / 1000 }],
-  moment: [{ label: 'N·mm', factor: 1 }, { label: 'N·m', factor: 1e3 }, { label: 'kN·m', factor: 1e6 }, { label: 'kN·mm', factor: 1e3 }, { label: 'MN·m', factor: 1e9 }, { label: 'kip·ft', factor: N_PER_KIP * MM_PER_FT }, { label: 'kip·in', factor: N_PER_KIP * MM_PER_IN }, { label: 'lbf·ft', aliases: ['lb·ft'], factor: N_PER_LBF * MM_PER_FT }, { label: 'lbf·in', aliases: ['lb·in'], factor: N_PER_LBF * MM_PER_IN }],
+  moment: [{ label: 'N·mm', factor: 1 }, { label: 'N·m', factor: 1e3 }, { label: 'kN·m', factor: 1e6 }, { label: 'kN·mm', factor: 1e3 }, { label: 'MN·m', factor: 1e9, exactCase: true }, { label: 'kip·ft', factor: N_PER_KIP * MM_PER_FT }, { label: 'kip·in', factor: N_PER_KIP * MM_PER_IN }, { label: 'lbf·ft', aliases: ['lb·ft'], factor: N_PER_LBF * MM_PER_FT }, { label: 'lbf·in', aliases: ['lb·in'], factor: N_PER_LBF * MM_PER_IN }],
   flow: [{ label: 'N/mm', aliases: ['kN/m'], factor: 1 }, { label: 'kip/in', factor: N_PER_KIP / MM_PER_IN }, { label: 'kip/ft', factor: N_PER_KIP / MM_PER_FT }],
   density: [{ label: 'kg/m³', aliases: ['kg/m3', 'kg/m^3'], factor: 1 }, { label: 'lb/ft³', aliases: ['lb/ft3', 'lb/ft^3', 'pcf'], factor: KGM3_PER_LBFT3 }],
   massPerLength: [{ label: 'kg/m', factor: 1 }, { label: 'lb/ft', aliases: ['plf'], factor: KGM_PER_LBFT }],
@@ -63,9 +65,9 @@ export function findUnit(kind: UnitKind, text: string): UnitDef | null {
   const t = normaliseUnit(text)
   const all = UNITS[kind]
   const names = (u: UnitDef) => [u.label, ...(u.aliases ?? [])].map(normaliseUnit)
-  const loose = (n: string) => n.replace(/·/g, '').toLowerCase()
-  // Exact spelling first, then ignoring case and the product sign (kNm, Nmm, kipft).
-  return all.find(u => names(u).includes(t)) ?? all.find(u => names(u).some(n => loose(n) === loose(t))) ?? null
+  const loose = (n: string, exactCase = false) => (exactCase ? n.replace(/·/g, '') : n.replace(/·/g, '').toLowerCase())
+  // Exact spelling first, then ignoring case (not for MN) and the product sign (kNm, Nmm, kipft).
+  return all.find(u => names(u).includes(t)) ?? all.find(u => names(u).some(n => loose(n, u.exactCase) === loose(t, u.exactCase))) ?? null
 }
 
 /** The kind a unit spelling belongs to, for the message "150 kN is a force, not a length". */

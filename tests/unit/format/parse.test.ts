@@ -81,6 +81,14 @@ describe('parseQuantity: the field unit, other units converted (NIST SP 811 fact
     expect(message('2 m', { kind: 'factor', name: 'The factor' })).toContain('takes no unit')
   })
 
+  it('reads a unit in any case except where case is the prefix: mpa is MPa, but mN is not MN', () => {
+    expect(value('235 mpa', { kind: 'stress', unit: 'MPa' })).toBe(235)
+    expect(value('2 KN', { kind: 'force', unit: 'kN' })).toBe(2000)
+    expect(value('2 MN', { kind: 'force', unit: 'kN' })).toBe(2e6)
+    expect(message('2 mN', { kind: 'force', unit: 'kN' })).toContain('not a unit this field knows')
+    expect(message('5k', { kind: 'force', unit: 'kN' })).toContain('not a unit this field knows')
+  })
+
   it('applies the limits after conversion', () => {
     expect(message('-10', { kind: 'length', unit: 'mm', positive: true, name: 'The grid' })).toBe('The grid must be positive (you typed “-10”).')
     expect(message('0', { kind: 'stress', unit: 'MPa', positive: true, name: 'E' })).toContain('must be positive')
