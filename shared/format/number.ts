@@ -67,10 +67,12 @@ function plain(a: number): string {
 
 /**
  * A value for an input box: `formatNumber` with 6 significant digits by default, so what the box
- * shows parses back (parseNumber) to the value within its displayed precision.
+ * shows parses back (parseNumber) to the value within its displayed precision. `decimals` rounds
+ * first to that many places (a vertex at 1.2e-14 mm of round-off shows 0, not 12 × 10⁻¹⁵).
  */
-export function formatForInput(v: number | null | undefined, digits = 6): string {
+export function formatForInput(v: number | null | undefined, digits = 6, decimals?: number): string {
   if (v === null || v === undefined) return ''
+  if (decimals !== undefined && Number.isFinite(v)) v = Number(v.toFixed(decimals))
   // No zero cut-off here: a value typed into a box comes back exactly as typed.
   return formatNumber(v, { digits, zeroBelow: 0 })
 }

@@ -38,5 +38,8 @@ describe('formatNumber (shared/format/number)', () => {
   it('formatForInput keeps six significant digits and leaves null blank', () => {
     expect(formatForInput(3.14159265)).toBe('3.14159')
     expect(formatForInput(null)).toBe('')
+    expect(formatForInput(1.2246e-14, 15, 6)).toBe('0')            // round-off of a rotated vertex
+    expect(formatForInput(-149.99999999997, 15, 6)).toBe('−150')
+    expect(formatForInput(12.7000001, 15, 6)).toBe('12.7')
   })
 })
