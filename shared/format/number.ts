@@ -68,11 +68,16 @@ function plain(a: number): string {
 /**
  * A value for an input box: `formatNumber` with 6 significant digits by default, so what the box
  * shows parses back (parseNumber) to the value within its displayed precision. `decimals` rounds
- * first to that many places (a vertex at 1.2e-14 mm of round-off shows 0, not 12 × 10⁻¹⁵).
+ * first to that many places (a vertex at 1.2e-14 mm of round-off shows 0, not 12 × 10⁻¹⁵) and
+ * writes values below 10⁶ positionally (0.00001).
  */
 export function formatForInput(v: number | null | undefined, digits = 6, decimals?: number): string {
   if (v === null || v === undefined) return ''
-  if (decimals !== undefined && Number.isFinite(v)) v = Number(v.toFixed(decimals))
+  if (decimals !== undefined && Number.isFinite(v)) {
+    v = Number(v.toFixed(decimals))
+    // Below 10⁶ a rounded coordinate is written out (0.00001, not 10 × 10⁻⁶): it reads like the rest of its column.
+    if (Math.abs(v) < 1e6) return v === 0 ? '0' : (v < 0 ? MINUS : '') + plain(Number(Math.abs(v).toPrecision(Math.min(15, digits))))
+  }
   // No zero cut-off here: a value typed into a box comes back exactly as typed.
   return formatNumber(v, { digits, zeroBelow: 0 })
 }

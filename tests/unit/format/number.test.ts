@@ -41,5 +41,7 @@ describe('formatNumber (shared/format/number)', () => {
     expect(formatForInput(1.2246e-14, 15, 6)).toBe('0')            // round-off of a rotated vertex
     expect(formatForInput(-149.99999999997, 15, 6)).toBe('−150')
     expect(formatForInput(12.7000001, 15, 6)).toBe('12.7')
+    expect(formatForInput(0.00001, 15, 6)).toBe('0.00001')
+    expect(formatForInput(-0.0000004, 15, 6)).toBe('0')
   })
 })
