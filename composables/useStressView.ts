@@ -14,7 +14,9 @@ import type { Ring } from '#shared/geometry/types'
 export interface ViewRegion extends FrameRegion {
   readonly E: number
   readonly fy: number | null
-  readonly allowable: number | null
+  /** The user's allowable stresses in tension and in compression (MPa, magnitudes), null when not typed. */
+  readonly allowableT: number | null
+  readonly allowableC: number | null
 }
 
 /** A cut line drawn by the user (mm, section coordinates). */
@@ -51,10 +53,10 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   const docLoads = computed(() => doc.value.loads)
   const cases = computed(() => doc.value.cases)
   const combinations = computed(() => doc.value.combinations)
-  /** Name, E and allowable stress of each part's material; the previous list is kept while the values are equal, so readers are not re-run. */
-  const allowables = computed<[string | null, number, number | null][]>((previous) => {
-    const next = doc.value.parts.map((p): [string | null, number, number | null] => [p.material.name ?? null, p.material.E, p.material.allowable ?? null])
-    const same = previous && previous.length === next.length && next.every((m, i) => m[0] === previous[i]![0] && m[1] === previous[i]![1] && m[2] === previous[i]![2])
+  /** Name, E and allowable stresses (tension, compression) of each part's material; the previous list is kept while the values are equal, so readers are not re-run. */
+  const allowables = computed<[string | null, number, number | null, number | null][]>((previous) => {
+    const next = doc.value.parts.map((p): [string | null, number, number | null, number | null] => [p.material.name ?? null, p.material.E, p.material.allowableT ?? null, p.material.allowableC ?? null])
+    const same = previous && previous.length === next.length && next.every((m, i) => m.every((v, k) => v === previous[i]![k]))
     return same ? previous : next
   })
   const anyNoTension = computed(() => doc.value.parts.some(p => p.material.noTension === true))
@@ -65,10 +67,10 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
     if (!a) return null
     const materials = allowables.value
     const regions: ViewRegion[] = a.regions.map((r) => {
-      const allowable = materials.find(m => m[0] === r.name && m[1] === r.E)?.[2] ?? null
+      const mat = materials.find(m => m[0] === r.name && m[1] === r.E)
       // markRaw: vue-konva deep-watches and stores its configs reactively; big vertex arrays must stay plain.
       const rings: Ring[] = markRaw(r.polygons.flat().map(ring => markRaw(ring as Ring[number][]) as Ring))
-      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, fc: r.fc ?? null, allowable }
+      return { name: r.name, n: r.n, E: r.E, rings, fy: r.fy, fc: r.fc ?? null, allowableT: mat?.[2] ?? null, allowableC: mat?.[3] ?? null }
     })
     const hull = markRaw(regionsHull(a.regions)) as Ring
     // The live analysis leaves the core out of the answer (`omit`): the same function the server runs gives it here.
@@ -77,7 +79,8 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   })
 
   const show = computed(() => settings.value.show)
-  const units = computed(() => displayUnits(settings.value.units))
+  // The unit system with the area and inertia units chosen in the settings bar.
+  const units = computed(() => displayUnits(settings.value))
   const noTension = computed(() => settings.value.noTension || anyNoTension.value)
   const baseSets = computed(() => loadSetsFor(show.value, docLoads.value, cases.value, combinations.value))
 
@@ -133,8 +136,9 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
 
   const slender = computed(() => {
     const s = section.value
+    // K·L about the major (u) and minor (v) principal axes (mm); nothing to show until one is typed.
     const KL = settings.value.effectiveLength
-    if (!s || !KL) return null
+    if (!s || (KL.u === null && KL.v === null)) return null
     const P = Math.max(0, ...sets.value.map(set => set.loads.reduce((sum, l) => sum + l.P, 0)))
     return slenderness(s.props, s.props.referenceE, KL, P)
   })

@@ -30,12 +30,15 @@ function shoelace(pts: [number, number][]): number {
   return Math.abs(s) / 2
 }
 
+/** A number as the app shows it (U+2212 minus). */
+const num = (text: string): number => Number(text.replace('\u2212', '-'))
+
 async function readVertices(page: Page): Promise<[number, number][]> {
   const pts: [number, number][] = []
   for (let i = 0; ; i++) {
     const x = page.getByTestId(`vertex-${i}-x`)
     if ((await x.count()) === 0) break
-    pts.push([Number(await x.inputValue()), Number(await page.getByTestId(`vertex-${i}-y`).inputValue())])
+    pts.push([num(await x.inputValue()), num(await page.getByTestId(`vertex-${i}-y`).inputValue())])
   }
   return pts
 }
@@ -379,7 +382,7 @@ test('round and tube by centre and radius, rotation by the handle, space-drag pa
   const handle = at(150, 50)
   handle.y -= 28
   const left = at(150 - 100, 0)
-  const firstBefore = [Number(await page.getByTestId('vertex-0-x').inputValue()), Number(await page.getByTestId('vertex-0-y').inputValue())]
+  const firstBefore = [num(await page.getByTestId('vertex-0-x').inputValue()), num(await page.getByTestId('vertex-0-y').inputValue())]
   expect(firstBefore).toEqual([200, 0]) // circles start on +x
   await drag(page, handle, left)
   await expect(page.getByTestId('vertex-0-x')).toHaveValue('150')

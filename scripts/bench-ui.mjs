@@ -105,7 +105,9 @@ async function benchVertexDrag(page, at, n, cdp, browser) {
   for (let rep = 0; rep < WARMUP + REPS; rep++) {
     if (rep === WARMUP) await page.evaluate(() => { window.kwFrames = []; window.kwFollow = []; window.kwSplit = [] })
     // Where vertex 0 is now (snapping moves it off the pointer's path), from the vertex table (mm).
-    const v = [Number(await page.getByTestId('vertex-0-x').inputValue()), Number(await page.getByTestId('vertex-0-y').inputValue())]
+    // The table writes the true minus sign (U+2212), as every number on screen.
+    const num = text => Number(text.replace('\u2212', '-'))
+    const v = [num(await page.getByTestId('vertex-0-x').inputValue()), num(await page.getByTestId('vertex-0-y').inputValue())]
     const [sx, sy] = at(v[0], v[1])
     const seen = await page.evaluate(() => window.kwFollow.length)
     await page.mouse.move(sx, sy)

@@ -1,3 +1,6 @@
+import { KGM_PER_LBFT, MM_PER_FT, MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from '../format/units'
+import { formatNumber } from '../format/number'
+
 /**
  * Display units. The model is always mm, N, MPa, N·mm; these helpers convert for display only.
  * Factors from NIST Special Publication 811 (2008), Appendix B: 1 in = 25.4 mm exactly,
@@ -11,20 +14,39 @@ export type UnitSystem = 'SI' | 'US'
 /** What a number measures, which fixes its display unit. */
 export type Quantity = 'length' | 'area' | 'modulus' | 'inertia' | 'force' | 'stress' | 'moment' | 'massPerLength' | 'angle'
 
-/** mm per inch (NIST SP 811, exact). */
-export const MM_PER_IN = 25.4
-/** mm per foot (NIST SP 811, exact). */
-export const MM_PER_FT = 304.8
-/** N per pound-force (NIST SP 811, exact). */
-export const N_PER_LBF = 4.4482216152605
-/** N per kip (1000 lbf). */
-export const N_PER_KIP = 1000 * N_PER_LBF
-/** MPa per ksi: 6 894.757 293 168 Pa per psi × 1000 / 1e6 (NIST SP 811). */
-export const MPA_PER_KSI = 6.894757293168
-/** kg/m per lb/ft: 0.453 592 37 kg per lb (exact) / 0.3048 m per ft. */
-export const KGM_PER_LBFT = 0.45359237 / 0.3048
+export { MM_PER_IN, MM_PER_FT, N_PER_LBF, N_PER_KIP, MPA_PER_KSI, KGM_PER_LBFT } from '../format/units'
+/** The one display formatter (shared/format/number), re-exported for the editor's callers. */
+export { formatNumber }
+
+/** The area and second-moment display units the trade uses; null in the settings follows the unit system. */
+export type AreaUnit = 'mm2' | 'cm2' | 'm2' | 'in2'
+/** Second-moment display units (mm⁴, cm⁴, m⁴, in⁴). */
+export type InertiaUnit = 'mm4' | 'cm4' | 'm4' | 'in4'
+
+/** The display choices: the unit system and, optionally, the area and inertia units (null = the system's). */
+export interface UnitPrefs {
+  readonly units: UnitSystem
+  readonly areaUnit?: AreaUnit | null
+  readonly inertiaUnit?: InertiaUnit | null
+}
+
+/** A unit system alone or with the area and inertia choices (the sketch settings fit). */
+export type Units = UnitSystem | UnitPrefs
 
 interface UnitDef { unit: string; factor: number }
+
+const POW: Record<string, { unit: string; mm: number }> = { mm: { unit: 'mm', mm: 1 }, cm: { unit: 'cm', mm: 10 }, m: { unit: 'm', mm: 1000 }, in: { unit: 'in', mm: MM_PER_IN } }
+
+/** The unit of `q` under `units`: the area unit for areas, the inertia unit for second moments and (its length cubed) for moduli. */
+function def(q: Quantity, units: Units): UnitDef {
+  if (typeof units === 'string') return TABLE[units][q]
+  const a = units.areaUnit ? POW[units.areaUnit.slice(0, -1)] : null
+  const i = units.inertiaUnit ? POW[units.inertiaUnit.slice(0, -1)] : null
+  if (q === 'area' && a) return { unit: `${a.unit}²`, factor: a.mm ** 2 }
+  if (q === 'inertia' && i) return { unit: `${i.unit}⁴`, factor: i.mm ** 4 }
+  if (q === 'modulus' && i) return { unit: `${i.unit}³`, factor: i.mm ** 3 }
+  return TABLE[units.units][q]
+}
 
 // factor = model units per display unit (divide a model value by it to display).
 const TABLE: Record<UnitSystem, Record<Quantity, UnitDef>> = {
@@ -53,50 +75,33 @@ const TABLE: Record<UnitSystem, Record<Quantity, UnitDef>> = {
 }
 
 /** The display unit label of a quantity in a system, e.g. unitLabel('inertia', 'US') = 'in⁴'. */
-export function unitLabel(q: Quantity, system: UnitSystem): string {
-  return TABLE[system][q].unit
+export function unitLabel(q: Quantity, system: Units): string {
+  return def(q, system).unit
 }
 
 /** A model value (mm, N, MPa, N·mm, kg/m) converted to the display unit of `system`. */
-export function toDisplay(value: number, q: Quantity, system: UnitSystem): number {
-  return value / TABLE[system][q].factor
+export function toDisplay(value: number, q: Quantity, system: Units): number {
+  return value / def(q, system).factor
 }
 
 /** A value typed in the display unit of `system` converted back to model units (mm, N, MPa...). */
-export function fromDisplay(value: number, q: Quantity, system: UnitSystem): number {
-  return value * TABLE[system][q].factor
+export function fromDisplay(value: number, q: Quantity, system: Units): number {
+  return value * def(q, system).factor
 }
 
 /**
- * A model value formatted for display with its unit: four significant digits, switching to
- * "1.234 × 10⁶" notation beyond 1e6 or below 1e-3 so large inertias stay readable.
+ * A model value formatted for display with its unit (shared/format/number: four significant digits,
+ * exponents in steps of three beyond 1e6 or below 1e-3: "159.1 × 10⁶ mm⁴").
  */
-export function formatQuantity(value: number | null | undefined, q: Quantity, system: UnitSystem, digits = 4): string {
+export function formatQuantity(value: number | null | undefined, q: Quantity, system: Units, digits = 4): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—'
   return `${formatNumber(toDisplay(value, q, system), digits)} ${unitLabel(q, system)}`
 }
 
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', 0: '⁰', 1: '¹', 2: '²', 3: '³', 4: '⁴', 5: '⁵', 6: '⁶', 7: '⁷', 8: '⁸', 9: '⁹' }
-
-/** A plain number with `digits` significant digits; scientific "× 10ⁿ" outside [1e-3, 1e6). */
-export function formatNumber(v: number, digits = 4): string {
-  if (!Number.isFinite(v)) return '—'
-  if (v === 0) return '0'
-  const a = Math.abs(v)
-  if (a >= 1e6 || a < 1e-3) {
-    const exp = Math.floor(Math.log10(a))
-    const mant = v / 10 ** exp
-    const sup = String(exp).split('').map(c => SUPERSCRIPT[c] ?? c).join('')
-    return `${Number(mant.toPrecision(digits))} × 10${sup}`
-  }
-  // Keep at least the integer digits: 12 345 mm² stays 12345, not 1.235e4.
-  const intDigits = Math.max(1, Math.floor(Math.log10(a)) + 1)
-  return String(Number(v.toPrecision(Math.max(digits, intDigits))))
-}
-
 /** A length in mm written for an input box in the display unit (up to 6 decimals, no trailing zeros). */
-export function lengthForInput(mm: number, system: UnitSystem): string {
-  return String(Number(toDisplay(mm, 'length', system).toFixed(6)))
+export function lengthForInput(mm: number, system: Units): string {
+  // Rounded to 6 decimals, then every remaining digit kept: the box shows what parseQuantity reads back.
+  return formatNumber(Number(toDisplay(mm, 'length', system).toFixed(6)), { digits: 15 })
 }
 
 /**

@@ -1,5 +1,6 @@
 import { scaleLinear } from 'd3-scale'
-import { MM_PER_IN, N_PER_KIP, toDisplay, unitLabel, type Quantity, type UnitSystem } from '../editor/units'
+import { MM_PER_IN, N_PER_KIP, toDisplay, unitLabel, type Quantity, type Units, type UnitSystem } from '../editor/units'
+import { formatNumber } from '../format/number'
 
 /**
  * Stress colours: compression dark blue-violet, tension ochre, a light neutral at zero. The two hues
@@ -25,14 +26,19 @@ export interface DisplayUnits {
   /** Force per unit length (shear flow): N/mm shown as kN/m (numerically equal) or kip/in. */
   readonly flow: { readonly label: string; readonly perNPerMm: number }
   readonly moment: { readonly label: string; readonly perNmm: number }
+  /** Areas (mm²), section moduli (mm³) and second moments (mm⁴) in the chosen units (settings areaUnit, inertiaUnit). */
+  readonly area: { readonly label: string; readonly perMm2: number }
+  readonly modulus: { readonly label: string; readonly perMm3: number }
+  readonly inertia: { readonly label: string; readonly perMm4: number }
 }
 
 /**
  * SI shows kN, MPa, mm, kN/m, kN·m; US shows kip, ksi, in, kip/in, kip·ft. Factors from the editor's
  * units module (NIST SP 811, README "Method"), so the stress view and the property panel agree.
  */
-export function displayUnits(system: UnitSystem): DisplayUnits {
-  const per = (q: Quantity) => ({ label: unitLabel(q, system), factor: toDisplay(1, q, system) })
+export function displayUnits(units: Units): DisplayUnits {
+  const system = typeof units === 'string' ? units : units.units
+  const per = (q: Quantity) => ({ label: unitLabel(q, units), factor: toDisplay(1, q, units) })
   const stress = per('stress')
   const force = per('force')
   const length = per('length')
@@ -44,18 +50,14 @@ export function displayUnits(system: UnitSystem): DisplayUnits {
     length: { label: length.label, perMm: length.factor },
     flow: system === 'US' ? { label: 'kip/in', perNPerMm: MM_PER_IN / N_PER_KIP } : { label: 'kN/m', perNPerMm: 1 },
     moment: { label: moment.label, perNmm: moment.factor },
+    area: { label: per('area').label, perMm2: per('area').factor },
+    modulus: { label: per('modulus').label, perMm3: per('modulus').factor },
+    inertia: { label: per('inertia').label, perMm4: per('inertia').factor },
   }
 }
 
-/** A number with about `digits` significant figures, no exponent for ordinary magnitudes, "−" for minus. */
-export function formatNumber(value: number, digits = 3): string {
-  if (!Number.isFinite(value)) return '–'
-  if (value === 0) return '0'
-  const mag = Math.floor(Math.log10(Math.abs(value)))
-  const decimals = Math.max(0, Math.min(6, digits - 1 - mag))
-  const s = Math.abs(value) >= 1e7 || Math.abs(value) < 1e-4 ? value.toExponential(digits - 1) : value.toFixed(decimals)
-  return s.replace('-', '−')
-}
+/** The one display formatter (shared/format/number), re-exported for the stress view's callers. */
+export { formatNumber }
 
 /** Coordinates closer to zero than this (mm, a nanometre) are rounding noise of the mechanics and read 0. */
 const POINT_ZERO_MM = 1e-6
@@ -73,7 +75,7 @@ export function formatPoint(x: number, y: number, units: DisplayUnits): string {
 export function formatStress(valueMPa: number, units: DisplayUnits, zeroTol = 1e-9): string {
   if (!Number.isFinite(valueMPa)) return '–'
   if (Math.abs(valueMPa) <= zeroTol) return `0 ${units.stress.label}`
-  return `${formatNumber(Math.abs(valueMPa) * units.stress.perMPa)} ${units.stress.label} ${valueMPa < 0 ? 'C' : 'T'}`
+  return `${formatNumber(Math.abs(valueMPa) * units.stress.perMPa, 3)} ${units.stress.label} ${valueMPa < 0 ? 'C' : 'T'}`
 }
 
 /** A diverging colour scale of stress (MPa, tension positive): maps a value to a CSS colour. */

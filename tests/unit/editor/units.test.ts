@@ -36,11 +36,11 @@ describe('display units (factors from NIST SP 811, Appendix B)', () => {
     expect(unitLabel('stress', 'US')).toBe('ksi')
   })
 
-  it('formatNumber keeps integer digits and switches to × 10ⁿ beyond a million', () => {
+  it('formatNumber keeps integer digits and switches to exponents in steps of three beyond a million', () => {
     expect(formatNumber(12345)).toBe('12345')
     expect(formatNumber(2.72480001)).toBe('2.725')
-    expect(formatNumber(19430000)).toBe('1.943 × 10⁷')
-    expect(formatNumber(0.0001234)).toBe('1.234 × 10⁻⁴')
+    expect(formatNumber(19430000)).toBe('19.43 × 10⁶')
+    expect(formatNumber(0.0001234)).toBe('123.4 × 10⁻⁶')
   })
 
   it('formatQuantity writes value and unit, and a dash for null', () => {
@@ -51,5 +51,20 @@ describe('display units (factors from NIST SP 811, Appendix B)', () => {
   it('lengthForInput gives inches for US with 6 decimals at most', () => {
     expect(lengthForInput(254, 'US')).toBe('10')
     expect(lengthForInput(1, 'US')).toBe('0.03937')
+  })
+
+  // NIST SP 811: 1 cm⁴ = 10⁴ mm⁴, 1 m⁴ = 10¹² mm⁴, 1 in⁴ = 416 231.425 6 mm⁴; 1 in² = 645.16 mm².
+  it.each([
+    [{ units: 'SI', inertiaUnit: 'cm4' }, 'inertia', 159.1e6, '15910 cm⁴'],
+    [{ units: 'SI', inertiaUnit: 'm4' }, 'inertia', 159.1e6, '159.1 × 10⁻⁶ m⁴'],
+    [{ units: 'SI', inertiaUnit: 'in4' }, 'inertia', 416231.4256, '1 in⁴'],
+    [{ units: 'US', inertiaUnit: 'mm4' }, 'inertia', 159.1e6, '159.1 × 10⁶ mm⁴'],
+    [{ units: 'SI', inertiaUnit: 'cm4' }, 'modulus', 1e6, '1000 cm³'],
+    [{ units: 'SI', areaUnit: 'cm2' }, 'area', 14400, '144 cm²'],
+    [{ units: 'SI', areaUnit: 'm2' }, 'area', 14400, '0.0144 m²'],
+    [{ units: 'SI', areaUnit: 'in2' }, 'area', 645.16, '1 in²'],
+    [{ units: 'US', areaUnit: null }, 'area', 645.16, '1 in²'],
+  ] as const)('formatQuantity under %j shows %s %s as %s', (prefs, q, v, text) => {
+    expect(formatQuantity(v, q, prefs)).toBe(text)
   })
 })
