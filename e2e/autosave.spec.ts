@@ -55,6 +55,10 @@ test('a change made while a save is under way, then opening another sketch at on
   await page.getByTestId('sketch-title').press('Enter')
   await expect(page.getByTestId('save-indicator')).toHaveAttribute('data-status', 'saved', { timeout: 10_000 })
   await expect(page.getByTestId('save-conflict')).toHaveCount(0)
+  // Back to the demo title, for the tests that look for it.
+  await page.getByTestId('sketch-title').fill('Crane column C3')
+  await page.getByTestId('sketch-title').press('Enter')
+  await expect(page.getByTestId('save-indicator')).toHaveAttribute('data-status', 'saved', { timeout: 10_000 })
   // Opened again at once: both parts are there.
   await page.unroute(`**/api/sketches/${id}`)
   await open(page, `/sketches/${id}`)

@@ -3,7 +3,8 @@ import type { StressPlane } from '../mechanics/types'
 
 /**
  * A material region to check: n = E / E_ref, its rings (mm), and its limits (MPa, magnitudes): the
- * user's allowable stress in tension and in compression, each falling back to the yield stress fy.
+ * user's allowable stress in tension and in compression, each falling back to the yield stress fy
+ * (compression: to the compression or bearing strength fc first).
  */
 export interface CheckRegion {
   readonly name: string
@@ -12,6 +13,8 @@ export interface CheckRegion {
   readonly allowableT?: number | null
   readonly allowableC?: number | null
   readonly fy?: number | null
+  /** Compression or bearing strength (MPa): the compression limit when no allowable compression is typed, before fy. */
+  readonly fc?: number | null
 }
 
 /** One side of a material's check: its worst point (MPa, tension positive), the limit used and the verdict. */
@@ -19,7 +22,7 @@ export interface CheckSide {
   readonly worst: { value: number; x: number; y: number } | null
   /** Limit stress (MPa, a magnitude) and which value it is; null when the user gave none. */
   readonly limit: number | null
-  readonly limitKind: 'allowable' | 'yield' | null
+  readonly limitKind: 'allowable' | 'strength' | 'yield' | null
   /** |worst| / limit (-); null without a limit or without a point stressed on this side. */
   readonly utilisation: number | null
   /** 'none': no point of the material is stressed on this side. */
@@ -63,16 +66,16 @@ export function checkUtilisation(regions: readonly CheckRegion[], planes: readon
     }
     const fy = positive(region.fy)
     const tension = side(t, positive(region.allowableT), fy)
-    const compression = side(c, positive(region.allowableC), fy)
+    const compression = side(c, positive(region.allowableC), fy, positive(region.fc))
     const governing = govern(tension, compression)
     const g = governing === 'tension' ? tension : governing === 'compression' ? compression : { worst: null, limit: null, limitKind: null, utilisation: null, status: 'none' as const }
     return { name: region.name, ...g, tension, compression, governing }
   })
 }
 
-function side(worst: CheckSide['worst'], allowable: number | null, fy: number | null): CheckSide {
-  const limit = allowable ?? fy
-  const limitKind = allowable !== null ? 'allowable' : fy !== null ? 'yield' : null
+function side(worst: CheckSide['worst'], allowable: number | null, fy: number | null, fc: number | null = null): CheckSide {
+  const limit = allowable ?? fc ?? fy
+  const limitKind = allowable !== null ? 'allowable' : fc !== null ? 'strength' : fy !== null ? 'yield' : null
   if (worst === null) return { worst, limit, limitKind, utilisation: null, status: 'none' }
   const utilisation = limit !== null ? Math.abs(worst.value) / limit : null
   const status = utilisation === null ? 'no-limit' : utilisation <= 1 ? 'pass' : 'over'
@@ -95,7 +98,7 @@ function positive(v: number | null | undefined): number | null {
 
 /** What a side's limit is, in words: "the allowable compression", "the yield stress fy". */
 export function limitWords(kind: CheckSide['limitKind'], which: 'tension' | 'compression'): string {
-  return kind === 'allowable' ? `the allowable ${which}` : 'the yield stress fy'
+  return kind === 'allowable' ? `the allowable ${which}` : kind === 'strength' ? 'the compression or bearing strength fc' : 'the yield stress fy'
 }
 
 /**

@@ -68,3 +68,14 @@ describe('checkUtilisation', () => {
     expect(checkMessage(row!)).toContain('no load')
   })
 })
+
+describe('checkUtilisation: compression against fc', () => {
+  it('a no-tension material with fc and no allowable is checked in compression against fc (|−0.59| / 0.2, by hand)', () => {
+    const ring = [[0, 0], [100, 0], [100, 100], [0, 100]] as const
+    const rows = checkUtilisation([{ name: 'Soil', n: 1, rings: [ring], fc: 0.2 }], [{ a: -0.59, b: 0, c: 0 }], 0)
+    expect(rows[0]!.compression.limitKind).toBe('strength')
+    expect(rows[0]!.compression.limit).toBe(0.2)
+    expect(rows[0]!.compression.utilisation).toBeCloseTo(0.59 / 0.2, 12)
+    expect(rows[0]!.status).toBe('over')
+  })
+})
