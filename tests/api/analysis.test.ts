@@ -123,7 +123,7 @@ describe('POST /api/analysis', () => {
     [{ parts: [{ outline: [[0, 0], [5, 0], [10, 0]] }] }, 422, /zero area|collinear|area/i],
     [{ parts: [{ outline: rect(10, 10), material: { E: -1 } }] }, 400, /E must be positive/],
     [{ parts: [{ outline: rect(10, 10) }], loads: [{ P: 'x', x: 0, y: 0 }] }, 400, /P/],
-    [{ parts: [{ outline: rect(10, 10), material: { E: 200000 } }, { outline: rect(10, 10, 5, 0), material: { E: 70000 } }] }, 422, /parts? 1 and 2 overlap/i],
+    [{ parts: [{ outline: rect(10, 10), material: { E: 200000 } }, { outline: rect(10, 10, 5, 0), material: { E: 70000 } }] }, 422, /part 1 and part 2 overlap/i],
   ])('bad input %j answers %i with a message', async (body, status, reason) => {
     const r = await c.post('/api/analysis', body)
     expect(r.status).toBe(status)

@@ -40,7 +40,7 @@ describe('sketch routes', () => {
   it('without a document a new sketch gets an empty one', async () => {
     const made = await owner.post('/api/sketches', { title: 'Blank' })
     expect(made.status).toBe(201)
-    expect(made.body.document).toMatchObject({ schema: 'kernwise.sketch/1', parts: [], loads: [] })
+    expect(made.body.document).toMatchObject({ schema: 'kernwise.sketch/2', parts: [], loads: [] })
     expect(made.body.document.cases).toHaveLength(1)
   })
 
