@@ -34,6 +34,8 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
   const analysisState = source?.analysis ? null : useAnalysis()
   const store = source?.doc ? null : useSketchStore()
   const analysis = computed(() => (source?.analysis ? source.analysis() : analysisState!.value.result))
+  /** The last answer was an error (bad geometry): the stresses of the answer before it no longer apply. */
+  const invalid = computed(() => (analysisState ? analysisState.value.error : null))
   const doc = computed(() => toRaw(source?.doc ? source.doc() : store!.doc))
 
   /** The load being dragged and where it is now (mm), or null. */
@@ -63,7 +65,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
 
   const section = computed(() => {
     // Plain data, not reactive proxies: the hot loops below read every vertex on every frame.
-    const a = analysis.value ? toRaw(analysis.value) : null
+    const a = analysis.value && !invalid.value ? toRaw(analysis.value) : null
     if (!a) return null
     const materials = allowables.value
     const regions: ViewRegion[] = a.regions.map((r) => {
@@ -162,7 +164,7 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
     return d
   }
 
-  return { analysis, doc, section, show, units, noTension, sets, frame, settled, scale, shownIds, loads, checks, slender, drag, snap, envelopeSide, cut, cutMode, setDrag, endDrag }
+  return { analysis, invalid, doc, section, show, units, noTension, sets, frame, settled, scale, shownIds, loads, checks, slender, drag, snap, envelopeSide, cut, cutMode, setDrag, endDrag }
 }
 
 /** The live stress view state. */

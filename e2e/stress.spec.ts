@@ -163,5 +163,11 @@ test('a cut line across the section plots the stress with end values and the zer
   // 4.167·(1 + 1.5) + 4.167 = 14.58 MPa C (hand calculation).
   const expectedEnv = (P / (b * h)) * (1 + (6 * 100) / b) + (1e8 * 300) / ((b * h ** 3) / 12)
   expect(firstNumber(await page.getByTestId('max-compression').textContent())).toBeCloseTo(expectedEnv, 1)
+  // Both combinations reach it (at opposite corners): the legend names the one that governs.
+  await expect(page.getByTestId('governs-compression')).toHaveText(/Example: dead [+−] wind/)
+  // Single cases stay selectable beside the combinations.
+  await page.getByTestId('show-picker').selectOption({ label: 'Case: Wind' })
+  await expect(page.getByTestId('stress-legend')).toContainText('Normal stress')
+  await page.getByTestId('show-picker').selectOption({ label: 'Envelope of all combinations' })
   await shot(page, 'stress-envelope')
 })

@@ -67,9 +67,11 @@ export interface StressFrame {
   clampAbove: number
   /** No-tension: each material's peak pressure against its compression or bearing strength (the worst set in an envelope). */
   bearing: BearingCheck[]
+  /** No set carries a load or a moment: nothing to show but "no load". */
+  noLoad: boolean
 }
 
-const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1, overturning: [], governs: { min: null, max: null }, clampAbove: Infinity, bearing: [] }
+const EMPTY: StressFrame = { kind: 'none', planes: [], resultant: null, min: null, max: null, neutral: null, neutralInSection: false, inKern: null, margin: null, onset: null, contact: null, limit: 1, overturning: [], governs: { min: null, max: null }, clampAbove: Infinity, bearing: [], noLoad: false }
 const scratchSeg: number[] = []
 const scratchT: number[] = []
 
@@ -80,7 +82,8 @@ const scratchT: number[] = []
  */
 export function evaluateFrame(input: FrameInput, dir: readonly [number, number] = [1, 0]): StressFrame {
   const { props, hull, regions, sets } = input
-  if (sets.length === 0 || regions.length === 0) return EMPTY
+  if (regions.length === 0) return EMPTY
+  if (!sets.some(set => set.loads.some(l => l.P !== 0) || set.moments.Mx !== 0 || set.moments.My !== 0)) return { ...EMPTY, noLoad: true }
   const planes: StressPlane[] = []
   let first: ReturnType<typeof resultantActions> | null = null
   for (const set of sets) {

@@ -113,3 +113,15 @@ describe('snapLoadPoint', () => {
     expect(out).toEqual([40, 30])
   })
 })
+
+describe('evaluateFrame without a load', () => {
+  it('says there is no load (no 0 MPa extremes, no pass at 0 %); a moment alone is a load', () => {
+    const none = evaluateFrame(inputFor([{ outline: rect(200, 100) }], [setOf([])]))
+    expect(none.noLoad).toBe(true)
+    expect(none.kind).toBe('none')
+    expect(none.min).toBeNull()
+    const moment = evaluateFrame(inputFor([{ outline: rect(200, 100) }], [setOf([], 1e6, 0)]))
+    expect(moment.noLoad).toBe(false)
+    expect(moment.kind).toBe('plane')
+  })
+})
