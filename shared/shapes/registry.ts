@@ -36,7 +36,9 @@ export interface ShapeParamsByKind {
 export interface ShapeParam<K extends string = string> {
   readonly key: K
   readonly label: string
-  readonly unit: 'mm' | 'deg'
+  /** 'choice': one of `choices` (a number standing for an option, such as an orientation). */
+  readonly unit: 'mm' | 'deg' | 'choice'
+  readonly choices?: readonly { readonly value: number; readonly label: string }[]
   readonly default: number | null
   readonly min: number
   readonly minExclusive: boolean
@@ -78,7 +80,15 @@ const toe = radius('r2', 'Toe radius', 0, true, 'Radius at the flange toes; 0 fo
 export const SHAPES: { readonly [K in ShapeKind]: ShapeDefinition<ShapeParamsByKind[K]> } = {
   plate: {
     kind: 'plate', label: 'Plate', placement: 'Centred on the origin.',
-    params: [dim('b', 'Width', 200, 'Along x.'), dim('h', 'Thickness', 20, 'Along y.')],
+    params: [
+      dim('b', 'Width', 200, 'Across the plate.'),
+      dim('h', 'Thickness', 20, 'Through the plate.'),
+      {
+        key: 'vertical', label: 'Orientation', unit: 'choice', default: 0, min: 0, minExclusive: false, max: 1, maxExclusive: false, optional: true,
+        choices: [{ value: 0, label: 'horizontal' }, { value: 1, label: 'vertical' }],
+        help: 'Horizontal: the width runs along x (a flange plate); vertical: along y (a web plate).',
+      },
+    ],
     build: (p, tol) => plate(p, { tol }),
   },
   circle: {
@@ -183,6 +193,12 @@ export type ShapeValidation =
 
 function paramSchema(p: ShapeParam): z.ZodType<number | null | undefined> {
   const name = `${p.label} (${p.key})`
+  if (p.unit === 'choice') {
+    const values = (p.choices ?? []).map((c) => c.value)
+    const words = (p.choices ?? []).map((c) => `${c.value} (${c.label})`).join(' or ')
+    const choice = z.number({ error: `${name} is ${words}.` }).refine((v) => values.includes(v), `${name} is ${words}.`)
+    return p.optional ? choice.nullish() : choice
+  }
   const unit = p.unit === 'deg' ? '°' : ' mm'
   let s = z.number({ error: (iss) => (iss.input === undefined ? `${name} is required.` : `${name} must be a number in ${p.unit}.`) })
   s = p.minExclusive

@@ -3,6 +3,7 @@ import type { Ring } from '../../../shared/geometry/types'
 import { ringArea } from '../../../shared/geometry/moments'
 import { ShapeError } from '../../../shared/shapes/common'
 import { plate } from '../../../shared/shapes/plate'
+import { validateShapeParams } from '../../../shared/shapes/registry'
 import { expectClose } from '../../support/expect-close'
 import { centroidal } from './centroidal'
 
@@ -44,5 +45,22 @@ describe('plate(b, h)', () => {
       expect((e as ShapeError).field).toBe(field)
       expect((e as ShapeError).message).toMatch(/must be a positive number of mm/)
     }
+  })
+})
+
+describe('plate orientation', () => {
+  it('horizontal by default (width along x); vertical stands it up (width along y), by hand', () => {
+    const flat = validateShapeParams('plate', { b: 200, h: 20 })
+    const standing = validateShapeParams('plate', { b: 200, h: 20, vertical: 1 })
+    if (!flat.ok || !standing.ok) throw new Error('expected valid plates')
+    const ys = standing.geometry.outline.map(p => p[1])
+    expect(Math.max(...ys) - Math.min(...ys)).toBe(200)
+    expect(Math.max(...flat.geometry.outline.map(p => p[0]))).toBe(100)
+  })
+
+  it('an orientation other than 0 or 1 is refused with a message naming the choices', () => {
+    const bad = validateShapeParams('plate', { b: 200, h: 20, vertical: 2 })
+    expect(bad.ok).toBe(false)
+    if (!bad.ok) expect(bad.error.message).toBe('Orientation (vertical) is 0 (horizontal) or 1 (vertical).')
   })
 })

@@ -15,7 +15,7 @@ describe('SHAPES', () => {
   it('has the documented parameter keys per kind', () => {
     const keys = Object.fromEntries(SHAPE_KINDS.map((k) => [k, SHAPES[k].params.map((p) => p.key)]))
     expect(keys).toEqual({
-      plate: ['b', 'h'],
+      plate: ['b', 'h', 'vertical'],
       circle: ['d'],
       tube: ['d', 't'],
       rhs: ['b', 'h', 't', 'ro', 'ri'],
@@ -30,7 +30,7 @@ describe('SHAPES', () => {
     for (const p of SHAPES[kind].params) {
       expect(p.label.length).toBeGreaterThan(0)
       expect(p.help.length).toBeGreaterThan(0)
-      expect(['mm', 'deg']).toContain(p.unit)
+      expect(['mm', 'deg', 'choice']).toContain(p.unit)
       if (p.default === null) {
         expect(p.optional).toBe(true)
         continue
