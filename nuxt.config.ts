@@ -26,9 +26,11 @@ export default defineNuxtConfig({
     },
   },
   runtimeConfig: {
-    // Overridden at run time by NUXT_DB_PATH, NUXT_SEED_DEMO, NUXT_SESSION_PASSWORD.
+    // Overridden at run time by NUXT_DB_PATH, NUXT_SEED_DEMO, NUXT_SESSION_PASSWORD,
+    // NUXT_TRUSTED_PROXIES (comma-separated addresses whose X-Forwarded-* headers are believed).
     dbPath: '.data/kernwise.sqlite',
     seedDemo: false,
+    trustedProxies: '',
     session: {
       name: 'kernwise-session',
       password: '',

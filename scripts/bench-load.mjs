@@ -42,6 +42,15 @@ try {
   const health = await run(`${url}/api/health`, 'health')
   await run(`${url}/api/sketches`, 'sketch-list', { headers: auth })
   const analysis = await run(`${url}/api/analysis`, 'analysis-1000-vertices', { method: 'POST', headers: auth, body })
+  const four = await run(`${url}/api/analysis`, 'analysis-1000-vertices-4-clients', { method: 'POST', headers: auth, body, connections: 4 })
+  // Health while four heavy analyses (500-vertex parts x 40, about 20 000 vertices) keep the server busy.
+  const heavy = JSON.stringify({ parts: Array.from({ length: 40 }, (_, i) => ({ outline: ring(500, 40).map(([x, y]) => [x + (i % 8) * 100, y + Math.floor(i / 8) * 100]), holes: [], material: { E: 200000 } })), loads: [{ P: 1000, x: 350, y: 200 }] })
+  const busy = autocannon({ url: `${url}/api/analysis`, connections: 4, duration: DURATION, method: 'POST', headers: auth, body: heavy })
+  await new Promise(r => setTimeout(r, 500))
+  const during = await run(`${url}/api/health`, 'health-during-4-heavy-analyses', { connections: 1, duration: Math.max(1, DURATION - 2) })
+  const heavyResult = await busy
+  console.log(`heavy-analyses req_per_s=${heavyResult.requests.average.toFixed(1)} p50_ms=${heavyResult.latency.p50} non2xx=${heavyResult.non2xx}`)
+  console.log(`summary analysis_4_clients_req_per_s=${four.requests.average.toFixed(0)} health_p99_during_heavy_ms=${during.latency.p99}`)
   const ratio = health.latency.p50 > 0 ? analysis.latency.p50 / health.latency.p50 : NaN
   console.log(`analysis-vs-health p50_ratio=${Number.isFinite(ratio) ? ratio.toFixed(2) : 'n/a'} (a 1 000-vertex analysis costs this many health checks)`)
 } finally {
