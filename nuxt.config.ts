@@ -23,6 +23,9 @@ export default defineNuxtConfig({
         { rel: 'icon', type: 'image/svg+xml', href: '/kernwise-mark.svg' },
         { rel: 'preload', as: 'font', type: 'font/woff2', href: '/fonts/ibm-plex-sans-latin-400-normal.woff2', crossorigin: '' },
       ],
+      // zod would probe for eval (new Function) as its schemas are built; the content security
+      // policy forbids eval, so tell it before any module runs (this inline script carries the nonce).
+      script: [{ innerHTML: 'globalThis.__zod_globalConfig={jitless:true}' }],
     },
   },
   runtimeConfig: {
