@@ -1,4 +1,6 @@
+import { join } from 'node:path'
 import { fileURLToPath } from 'node:url'
+import { build as esbuild } from 'esbuild'
 
 const fontsDir = fileURLToPath(new URL('./fonts', import.meta.url))
 
@@ -34,6 +36,9 @@ export default defineNuxtConfig({
     dbPath: '.data/kernwise.sqlite',
     seedDemo: false,
     trustedProxies: '',
+    // The analysis worker pool (NUXT_ANALYSIS_WORKERS, _QUEUE, _PER_ACCOUNT, _TIMEOUT_MS,
+    // _INLINE_VERTICES); 0: the default (server/utils/analysis-pool.ts).
+    analysis: { workers: 0, queue: 0, perAccount: 0, timeoutMs: 0, inlineVertices: 0 },
     session: {
       name: 'kernwise-session',
       password: '',
@@ -47,6 +52,22 @@ export default defineNuxtConfig({
   nitro: {
     publicAssets: [{ dir: fontsDir, baseURL: '/fonts', maxAge: 60 * 60 * 24 * 365 }],
     serverAssets: [{ baseName: 'fonts', dir: fontsDir }],
+    hooks: {
+      // The analysis worker thread is its own bundle beside the server (server/utils/analysis-pool.ts finds it).
+      async compiled(nitro) {
+        if (nitro.options.dev) return
+        await esbuild({
+          entryPoints: [fileURLToPath(new URL('./server/workers/analysis.worker.ts', import.meta.url))],
+          outfile: join(nitro.options.output.serverDir, 'workers', 'analysis.mjs'),
+          bundle: true,
+          platform: 'node',
+          format: 'esm',
+          target: 'node20',
+          banner: { js: "import { createRequire } from 'node:module'; const require = createRequire(import.meta.url);" },
+          logLevel: 'warning',
+        })
+      },
+    },
   },
   vite: {
     optimizeDeps: { include: ['vue-konva', 'konva', 'polygon-clipping', 'clipper-lib', 'd3-scale', 'd3-contour'] },

@@ -30,11 +30,13 @@ async function run(url, title, opts) {
 buildIfStale()
 const dir = mkdtempSync(join(tmpdir(), 'kernwise-load-'))
 const port = await freePort()
-const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef' })
+const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef',
+  // One bench account drives up to 10 connections: lift the per-account analysis limit (default 4) for it.
+  NUXT_ANALYSIS_PER_ACCOUNT: '16' })
 try {
-  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
+  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
   const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
-  const tok = await (await fetch(`${url}/api/tokens`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify({ name: 'bench' }) })).json()
+  const tok = await (await fetch(`${url}/api/tokens`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url, cookie }, body: JSON.stringify({ name: 'bench' }) })).json()
   const auth = { authorization: `Bearer ${tok.token}`, 'content-type': 'application/json' }
   for (let i = 0; i < 20; i++) await fetch(`${url}/api/sketches`, { method: 'POST', headers: auth, body: JSON.stringify({ title: `Bench ${i}` }) })
   const body = JSON.stringify({ parts: [{ outline: ring(1000, 200), holes: [], material: { E: 200000 } }], loads: [{ P: 320000, x: 40, y: 25 }] })

@@ -12,31 +12,35 @@ export function textProblem(text: string): string | null {
   return null
 }
 
-/**
- * The first string (key or value) in a parsed JSON value that holds a control character or an
- * unpaired surrogate, as `{path, problem}` (path like "document.parts.2.name"), or null if none.
- * Arrays of numbers (the bulk of a section) are skipped quickly.
- */
-export function findUnsafeText(value: unknown, path: string[] = []): { path: string; problem: string } | null {
-  if (typeof value === 'string') {
-    const problem = textProblem(value)
-    return problem ? { path: path.join('.'), problem } : null
-  }
+/** Walks `value`; on a bad string returns its problem and fills `path` (leaf first) on the way back. */
+function walk(value: unknown, path: string[]): string | null {
+  if (typeof value === 'string') return textProblem(value)
   if (value === null || typeof value !== 'object') return null
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
       const v = value[i]
-      if (v === null || typeof v === 'number' || typeof v === 'boolean') continue
-      const hit = findUnsafeText(v, [...path, String(i)])
-      if (hit) return hit
+      if (v === null || typeof v !== 'object' && typeof v !== 'string') continue
+      const problem = walk(v, path)
+      if (problem) { path.push(String(i)); return problem }
     }
     return null
   }
-  for (const key of Object.keys(value)) {
+  for (const key in value) {
     const keyProblem = textProblem(key)
-    if (keyProblem) return { path: [...path, key].join('.'), problem: `has a field name that ${keyProblem}` }
-    const hit = findUnsafeText((value as Record<string, unknown>)[key], [...path, key])
-    if (hit) return hit
+    if (keyProblem) { path.push(key); return `has a field name that ${keyProblem}` }
+    const problem = walk((value as Record<string, unknown>)[key], path)
+    if (problem) { path.push(key); return problem }
   }
   return null
+}
+
+/**
+ * The first string (key or value) in a parsed JSON value that holds a control character or an
+ * unpaired surrogate, as `{path, problem}` (path like "document.parts.2.name"), or null if none.
+ * Numbers (the bulk of a section) cost one type check each; no path is built unless one is found.
+ */
+export function findUnsafeText(value: unknown): { path: string; problem: string } | null {
+  const path: string[] = []
+  const problem = walk(value, path)
+  return problem ? { path: path.reverse().join('.'), problem } : null
 }
