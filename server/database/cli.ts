@@ -1,10 +1,11 @@
-// Command-line database tasks (npm run db:seed, db:reset, db:passwords), run with tsx outside Nitro.
+// Command-line database tasks (npm run db:seed, db:reset, db:passwords, db:backup, db:restore), run with tsx outside Nitro.
 import { randomBytes } from 'node:crypto'
-import { rmSync } from 'node:fs'
-import { resolve } from 'node:path'
+import { copyFileSync, existsSync, rmSync } from 'node:fs'
+import { dirname, join, resolve } from 'node:path'
 import { createInterface } from 'node:readline/promises'
 import { Hash } from '@adonisjs/hash'
 import { Scrypt } from '@adonisjs/hash/drivers/scrypt'
+import { backupTo, checkBackup, replaceDatabase } from './backup'
 import { openDatabase } from './connection'
 import { demoAccountsWithPublishedPassword } from './demo-guard'
 import { migrate } from './migrate'
@@ -13,7 +14,9 @@ import { initModels } from '../models'
 
 // The same scrypt defaults nuxt-auth-utils' hashPassword uses, so seeded passwords verify.
 const hasher = new Hash(new Scrypt({}))
-const USAGE = 'usage: db.mjs seed | reset [--yes] [--no-demo] | passwords'
+const USAGE = 'usage: db.mjs seed | reset [--yes] [--no-demo] | passwords | backup [FILE] | restore FILE [--yes]'
+
+const stamp = () => new Date().toISOString().replace(/[-:]/g, '').replace(/\..*$/, '').replace('T', '-')
 
 /** Asks on the terminal; anything but "yes" (or no terminal at all) is a no. */
 async function confirm(question: string): Promise<boolean> {
@@ -27,10 +30,12 @@ async function confirm(question: string): Promise<boolean> {
 async function main(): Promise<void> {
   const [task, ...flags] = process.argv.slice(2)
   const path = resolve(process.env.NUXT_DB_PATH || '.data/kernwise.sqlite')
-  if (!['seed', 'reset', 'passwords'].includes(task ?? '')) {
+  if (!['seed', 'reset', 'passwords', 'backup', 'restore'].includes(task ?? '')) {
     console.error(USAGE)
     process.exit(2)
   }
+  if (task === 'backup') return backup(path, flags.find(f => !f.startsWith('--')))
+  if (task === 'restore') return restore(path, flags.find(f => !f.startsWith('--')), flags.includes('--yes'))
   if (task === 'reset') {
     if (!flags.includes('--yes') && !(await confirm(`This deletes ${path} with every account and sketch in it.`))) {
       console.error('Nothing deleted. (Pass --yes to reset without the question, e.g. in a script.)')
@@ -58,6 +63,56 @@ async function main(): Promise<void> {
     console.log(`Seeded the demo workspace into ${path}`)
   }
   await sequelize.close()
+}
+
+/** npm run db:backup [FILE]: a consistent copy while the app runs (default .data/backups/kernwise-<time>.sqlite beside the database). */
+async function backup(path: string, target?: string): Promise<void> {
+  if (!existsSync(path)) throw new Error(`There is no database at ${path}.`)
+  const file = resolve(target ?? join(dirname(path), 'backups', `kernwise-${stamp()}.sqlite`))
+  const sequelize = await openDatabase(path)
+  try {
+    await backupTo(sequelize, file)
+  } finally {
+    await sequelize.close()
+  }
+  console.log(`Backed up ${path} to ${file}`)
+}
+
+/** npm run db:restore FILE: checks the backup, keeps a copy of the current database, then puts the backup in its place. */
+async function restore(path: string, source: string | undefined, yes: boolean): Promise<void> {
+  if (!source || !existsSync(source)) throw new Error(`Name a backup file that exists: npm run db:restore -- FILE (got ${source ?? 'nothing'}).`)
+  const candidate = `${path}.restore-${stamp()}`
+  copyFileSync(resolve(source), candidate)
+  let summary: Awaited<ReturnType<typeof checkBackup>>
+  try {
+    const db = await openDatabase(candidate)
+    try {
+      summary = await checkBackup(db)
+    } finally {
+      await db.close()
+    }
+  } catch (error) {
+    rmSync(candidate, { force: true })
+    throw new Error(`Not restored: ${source} cannot be used (${error instanceof Error ? error.message : String(error)}). The database is unchanged.`)
+  }
+  const what = `${source}: ${summary.users} accounts, ${summary.sketches} sketches, ${summary.migrations.length} migrations`
+  if (!yes && !(await confirm(`This replaces ${path} with ${what}. Stop the server first.`))) {
+    rmSync(candidate, { force: true })
+    console.error('Nothing restored. (Pass --yes to restore without the question.)')
+    process.exit(1)
+  }
+  if (existsSync(path)) {
+    const keep = join(dirname(path), 'backups', `before-restore-${stamp()}.sqlite`)
+    const current = await openDatabase(path)
+    try {
+      await backupTo(current, keep)
+    } finally {
+      await current.close()
+    }
+    console.log(`Kept the current database as ${keep}`)
+  }
+  replaceDatabase(candidate, path)
+  console.log(`Restored ${what} into ${path}. Start the server again.`)
 }
 
 main().catch((error) => {

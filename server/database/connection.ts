@@ -3,7 +3,11 @@ import { dirname, resolve } from 'node:path'
 import { Sequelize } from 'sequelize'
 import sqlite3 from 'sqlite3'
 
-/** Opens the SQLite file at `path` (created with its folder if missing), WAL mode and foreign keys on. */
+/**
+ * Opens the SQLite file at `path` (created with its folder if missing): WAL journal, foreign keys
+ * on, and synchronous = FULL, so a save that was acknowledged survives a power cut (with WAL,
+ * NORMAL could lose the last commits; FULL syncs the log at every commit).
+ */
 export async function openDatabase(path: string): Promise<Sequelize> {
   const file = resolve(path)
   mkdirSync(dirname(file), { recursive: true })
@@ -17,6 +21,7 @@ export async function openDatabase(path: string): Promise<Sequelize> {
     retry: { max: 5, match: [/SQLITE_BUSY/] },
   })
   await sequelize.query('PRAGMA journal_mode = WAL;')
+  await sequelize.query('PRAGMA synchronous = FULL;')
   await sequelize.query('PRAGMA foreign_keys = ON;')
   await sequelize.query('PRAGMA busy_timeout = 5000;')
   return sequelize
