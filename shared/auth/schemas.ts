@@ -43,6 +43,13 @@ export const TokenBody = z.object({
     .nullish(),
 })
 
+export const ResetRequestBody = z.object({ email: Email })
+
+export const ResetBody = z.object({
+  token: z.string({ error: 'The reset link is incomplete: open it from the mail again' }).min(20, 'The reset link is incomplete: open it from the mail again').max(100),
+  password: NewPassword,
+})
+
 export const PasswordChangeBody = z.object({
   currentPassword: z.string({ error: 'Enter your current password' }).min(1, 'Enter your current password').max(200),
   newPassword: NewPassword,
