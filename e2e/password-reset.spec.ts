@@ -18,6 +18,8 @@ function lastMail(to: string): Promise<string> {
 test('a forgotten password is reset through the mailed link', async ({ page }) => {
   await open(page, '/sign-in')
   await page.getByRole('link', { name: 'Forgot your password?' }).click()
+  await expect(page).toHaveURL(/\/forgot-password/)
+  await expect(page.getByTestId('forgot-form')).toBeVisible()
   await page.getByLabel('E-mail').fill('checker@millrace.test')
   await page.getByRole('button', { name: 'Mail me a reset link' }).click()
   await expect(page.getByRole('status')).toContainText('reset link is on its way')
