@@ -29,7 +29,12 @@ async function confirm(question: string): Promise<boolean> {
 
 async function main(): Promise<void> {
   const [task, ...flags] = process.argv.slice(2)
+  const url = process.env.NUXT_DATABASE_URL || ''
   const path = resolve(process.env.NUXT_DB_PATH || '.data/kernwise.sqlite')
+  if (url && ['backup', 'restore', 'reset'].includes(task ?? '')) {
+    console.error(`${task} works on the SQLite file; for PostgreSQL use pg_dump / pg_restore / dropdb.`)
+    process.exit(2)
+  }
   if (!['seed', 'reset', 'passwords', 'backup', 'restore'].includes(task ?? '')) {
     console.error(USAGE)
     process.exit(2)
@@ -44,7 +49,7 @@ async function main(): Promise<void> {
     for (const suffix of ['', '-wal', '-shm']) rmSync(path + suffix, { force: true })
     console.log(`Removed ${path}`)
   }
-  const sequelize = await openDatabase(path)
+  const sequelize = await openDatabase(url || path)
   const applied = await migrate(sequelize)
   if (applied.length) console.log(`Applied migrations: ${applied.join(', ')}`)
   const db = initModels(sequelize)

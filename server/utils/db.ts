@@ -8,7 +8,7 @@ import { hashPassword, verifyPassword } from '#imports'
 let ready: Promise<Db> | null = null
 
 /**
- * The one database of this server: opened, migrated (and seeded with the demo workspace when
+ * The one database of this server (NUXT_DATABASE_URL for PostgreSQL, else the SQLite file NUXT_DB_PATH): opened, migrated (and seeded with the demo workspace when
  * runtime config `seedDemo` is on and the database has no accounts) on first use.
  * Every route awaits it, so no request sees a half-migrated database. A production server that
  * listens beyond loopback while demo accounts keep their published password exits here, before
@@ -18,7 +18,7 @@ export function useDb(): Promise<Db> {
   if (!ready) {
     const config = useRuntimeConfig()
     ready = (async () => {
-      const sequelize = await openDatabase(String(config.dbPath || '.data/kernwise.sqlite'))
+      const sequelize = await openDatabase(String(config.databaseUrl || config.dbPath || '.data/kernwise.sqlite'))
       await migrate(sequelize)
       const db = initModels(sequelize)
       if (config.seedDemo === true || config.seedDemo === 'true' || config.seedDemo === '1') {

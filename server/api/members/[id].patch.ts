@@ -1,4 +1,4 @@
-import { Transaction } from 'sequelize'
+import { countAndWrite } from '../../database/connection'
 import { IdParams, RoleBody } from '../../../shared/auth/schemas'
 
 /**
@@ -12,12 +12,12 @@ export default defineEventHandler(async (event) => {
   const { id } = await paramsAs(event, IdParams)
   const { role } = await readBodyAs(event, RoleBody)
   const db = await useDb()
-  const sqlite = db.sequelize.getDialect() === 'sqlite'
-  const member = await db.sequelize.transaction(sqlite ? { type: Transaction.TYPES.IMMEDIATE } : {}, async (transaction) => {
-    const found = await db.User.findByPk(id, { transaction, lock: !sqlite })
+  const { options, lock } = countAndWrite(db.sequelize)
+  const member = await db.sequelize.transaction(options, async (transaction) => {
+    const found = await db.User.findByPk(id, { transaction, lock })
     if (!found) throw createError({ statusCode: 404, message: 'Member not found' })
     if (found.role === 'admin' && role !== 'admin') {
-      const admins = await db.User.findAll({ where: { role: 'admin' }, attributes: ['id'], transaction, lock: !sqlite })
+      const admins = await db.User.findAll({ where: { role: 'admin' }, attributes: ['id'], transaction, lock })
       if (admins.length <= 1) throw createError({ statusCode: 409, message: 'This is the only admin. Make another member admin first.' })
     }
     await found.update({ role }, { transaction })
