@@ -123,7 +123,7 @@ function pump(): void {
     slot.timer = setTimeout(() => fail(slot, createError({
       statusCode: 422,
       statusMessage: 'Unprocessable Entity',
-      message: `The analysis took longer than ${Math.round(config!.timeoutMs / 1000)} s and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
+      message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
     })), config!.timeoutMs)
     slot.worker.postMessage(p.job)
   }

@@ -7,6 +7,7 @@ import { useTestServer } from './support/server'
 // Retry-After. Ordering and counts only: no timing is asserted (speed is npm run bench:load).
 const pooled = useTestServer({ NUXT_ANALYSIS_PER_ACCOUNT: '3', NUXT_ANALYSIS_INLINE_VERTICES: '-1' })
 const tight = useTestServer({ NUXT_ANALYSIS_WORKERS: '1', NUXT_ANALYSIS_QUEUE: '1', NUXT_ANALYSIS_PER_ACCOUNT: '50', NUXT_ANALYSIS_TIMEOUT_MS: '60000' })
+const slow = useTestServer({ NUXT_ANALYSIS_TIMEOUT_MS: '300', NUXT_ANALYSIS_INLINE_VERTICES: '-1' })
 const PASSWORD = 'correct-horse-battery'
 
 /** A wavy ring of n vertices around (cx, cy): simple, not convex (mm). */
@@ -20,12 +21,14 @@ function ring(n: number, r: number, cx = 0, cy = 0): [number, number][] {
 
 /** About 40 000 vertices in 40 separate parts: a second or so of work for the analysis. */
 const heavy = { parts: Array.from({ length: 40 }, (_, i) => ({ outline: ring(1000, 40, (i % 8) * 100, Math.floor(i / 8) * 100) })), loads: [{ P: 1000, x: 350, y: 200 }] }
+/** About 80 000 vertices (3 MB of JSON): well over 300 ms of work. */
+const heavier = { parts: Array.from({ length: 80 }, (_, i) => ({ outline: ring(1000, 40, (i % 10) * 100, Math.floor(i / 10) * 100) })) }
 /** A 100 x 200 rectangle: A = 20 000 mm² (b·h). */
 const small = { parts: [{ outline: [[0, 0], [100, 0], [100, 200], [0, 200]] }] }
 
 const clients: Record<string, Client> = {}
 beforeAll(async () => {
-  for (const [name, server] of [['pooled', pooled], ['tight', tight], ['tight2', tight]] as const) {
+  for (const [name, server] of [['pooled', pooled], ['tight', tight], ['tight2', tight], ['slow', slow]] as const) {
     const c = new Client(() => server.url)
     expect((await c.post('/api/auth/register', { email: `${name}@pool.test`, password: PASSWORD, name }, )).status).toBe(201)
     clients[name] = c
@@ -73,5 +76,16 @@ describe('analyses in worker threads', () => {
     expect(statuses.filter(s => s === 429).length).toBeGreaterThanOrEqual(1)
     expect(answers.find(a => a.status === 429)!.body.message).toMatch(/busy/)
     expect((await clients.tight!.post('/api/analysis', heavy)).status).toBe(200)
+  })
+
+  it('an analysis over the time limit is stopped with a 422, and the next one runs on a fresh worker', async () => {
+    expect((await clients.slow!.post('/api/analysis', small)).status).toBe(200) // the worker is up
+    const stopped = await clients.slow!.post('/api/analysis', heavier)
+    expect(stopped.status).toBe(422)
+    expect(stopped.body.message).toMatch(/took longer than 300 ms and was stopped/)
+    await new Promise(r => setTimeout(r, 1500)) // let the replacement worker load
+    const next = await clients.slow!.post('/api/analysis', small)
+    expect(next.status).toBe(200)
+    expect(next.body.properties.area).toBeCloseTo(20_000, 6) // b·h
   })
 })
