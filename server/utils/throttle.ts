@@ -66,3 +66,24 @@ export async function attemptSucceeded(id: number, email: string, ip: string): P
   const db = await useDb()
   await db.SignInAttempt.destroy({ where: { email, ip, id: { [Op.lte]: id } } })
 }
+
+/** Accounts one address may register within WINDOW_MS. */
+export const REGISTRATIONS_PER_ADDRESS = 10
+/** The e-mail column's marker for a registration in the attempts table (not an address anyone can have). */
+const REGISTRATION = '(registration)'
+
+/**
+ * Counts a registration from `ip` (in the same attempts table, so every instance shares it);
+ * 429 with Retry-After once the address has registered REGISTRATIONS_PER_ADDRESS accounts
+ * within the window.
+ */
+export async function assertRegistrationAllowed(event: H3Event, ip: string): Promise<void> {
+  const db = await useDb()
+  const row = await db.SignInAttempt.create({ email: REGISTRATION, ip })
+  const earlier = await db.SignInAttempt.count({ where: { email: REGISTRATION, ip, id: { [Op.lt]: row.id }, createdAt: { [Op.gt]: new Date(Date.now() - WINDOW_MS) } } })
+  if (earlier >= REGISTRATIONS_PER_ADDRESS) {
+    await row.destroy()
+    setResponseHeader(event, 'Retry-After', String(WINDOW_MS / 1000))
+    throw createError({ statusCode: 429, statusMessage: 'Too Many Requests', message: `Too many new accounts from your address; try again in ${WINDOW_MS / 60_000} minutes.`, data: { retryAfter: WINDOW_MS / 1000 } })
+  }
+}

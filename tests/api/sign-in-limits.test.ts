@@ -108,4 +108,15 @@ describe('limits are per (e-mail, address): nobody can lock others out', () => {
     expect(over.status).toBe(429)
     expect(over.body.message).toMatch(/from your address/)
   })
+
+  it('registration is throttled: the eleventh account from one address in 10 minutes is 429', async () => {
+    // 127.0.0.9 made five accounts in beforeAll.
+    for (let i = 0; i < 5; i++) {
+      expect((await postFrom(direct, '127.0.0.9', '/api/auth/register', { email: `extra-${i}@limits.test`, password: PASSWORD, name: 'extra' })).status).toBe(201)
+    }
+    const over = await postFrom(direct, '127.0.0.9', '/api/auth/register', { email: 'one-too-many@limits.test', password: PASSWORD, name: 'extra' })
+    expect(over.status).toBe(429)
+    expect(Number(over.retryAfter)).toBeGreaterThan(0)
+    expect((await postFrom(direct, '127.0.0.10', '/api/auth/register', { email: 'elsewhere@limits.test', password: PASSWORD, name: 'extra' })).status).toBe(201)
+  })
 })
