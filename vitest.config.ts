@@ -7,6 +7,24 @@ const alias = {
   '~~': root.replace(/\/$/, ''),
 }
 
+// The API tests that do not reach into the SQLite file themselves, run again on PostgreSQL by
+// .ci/run (KERNWISE_TEST_PG set), with the two-instance test.
+const onPostgres = ['auth', 'roles-tokens', 'sketches', 'analysis', 'analysis-checker', 'analysis-pool', 'sign-in-limits', 'requests', 'transport', 'fuzz']
+const postgres = process.env.KERNWISE_TEST_PG
+  ? [{
+      resolve: { alias },
+      test: {
+        name: 'api-pg',
+        environment: 'node',
+        include: [...onPostgres.map(n => `tests/api/${n}.test.ts`), 'tests/api-pg/**/*.test.ts'],
+        globalSetup: ['tests/api/global-setup.ts'],
+        fileParallelism: false,
+        testTimeout: 30_000,
+        hookTimeout: 180_000,
+      },
+    }]
+  : []
+
 export default defineConfig({
   test: {
     projects: [
@@ -30,6 +48,7 @@ export default defineConfig({
           hookTimeout: 180_000,
         },
       },
+      ...postgres,
     ],
   },
 })

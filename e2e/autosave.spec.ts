@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, signIn } from './support/helpers'
 
 /** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
 async function transform(page: Page) {
@@ -20,7 +20,7 @@ async function outline(page: Page, points: readonly (readonly [number, number])[
 
 test('a change made while a save is under way, then opening another sketch at once, is saved to its own sketch: a self-crossing outline is kept as drawn', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const { id } = await (await page.request.post('/api/sketches', { data: { title: 'Leave at once' } })).json()
+  const { id } = await (await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Leave at once' } })).json()
   await open(page, `/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   // Every save of this sketch takes 3 s, so the next change lands while one is under way.

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { open, shot, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 // The numbers a checker signs, as the editor shows them on the demo sketches.
 
@@ -46,7 +46,7 @@ test('Mezzanine post M1: bolt-hole cuts go through plate and flange, connections
 
 test('a tee of two plates: the weld line carries Vy·Q/I and is halved per line when two lines are chosen; a part becomes a cut', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const made = await page.request.post('/api/sketches', {
+  const made = await page.request.post('/api/sketches', { headers: SAME_ORIGIN,
     data: {
       title: 'Tee of two plates',
       document: {

@@ -1,9 +1,9 @@
 import { expect, test } from '@playwright/test'
-import { open, shot, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 test('dashboard: rename with Enter saves once, Escape cancels, delete asks, its undo outlives the page, and Recently deleted restores', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const made = await page.request.post('/api/sketches', { data: { title: 'Rename me' } })
+  const made = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Rename me' } })
   const { id } = await made.json()
   await open(page, '/')
   // Enter: saved, no "saved elsewhere" conflict.

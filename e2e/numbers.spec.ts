@@ -1,6 +1,6 @@
 import { expect, test, type Locator, type Page } from '@playwright/test'
 import { mkdirSync } from 'node:fs'
-import { ARTIFACTS, open, shot, signIn } from './support/helpers'
+import { ARTIFACTS, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 // Typed numbers (issue 17 item 1, issue 10 §6): every numeric field applies a value or refuses it
 // where the user sees it. Conversion factors from NIST SP 811, Appendix B: 1 in = 25.4 mm,
@@ -24,7 +24,7 @@ function pierDocument() {
 }
 
 async function newSketch(page: Page, title: string, document: unknown): Promise<string> {
-  const res = await page.request.post('/api/sketches', { data: { title, document } })
+  const res = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title, document } })
   expect(res.status()).toBe(201)
   return (await res.json()).id as string
 }

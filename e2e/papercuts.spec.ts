@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, shot, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 async function transform(page: Page) {
   const canvas = page.getByTestId('sketch-canvas')
@@ -12,7 +12,7 @@ async function transform(page: Page) {
 
 test('with no load the legend and the tension panel say so; with invalid geometry every stress panel says so', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const { id } = await (await page.request.post('/api/sketches', { data: { title: 'No load yet' } })).json()
+  const { id } = await (await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'No load yet' } })).json()
   await open(page, `/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   let at = await transform(page)

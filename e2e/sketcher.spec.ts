@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { shot, signIn } from './support/helpers'
+import { shot, signIn, SAME_ORIGIN } from './support/helpers'
 
 /** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
 async function transform(page: Page) {
@@ -146,7 +146,7 @@ test('the shortcut sheet opens with ? and the demo sketches open with their prop
 
 test('an outline by clicks, closed with Enter, then nudged, rotated and undone by keyboard', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const created = await page.request.post('/api/sketches', { data: { title: 'Keyboard outline' } })
+  const created = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Keyboard outline' } })
   const { id } = await created.json()
   await page.goto(`/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
@@ -189,14 +189,14 @@ test('an outline by clicks, closed with Enter, then nudged, rotated and undone b
 
 test('a save that lost the race offers "Keep mine as a copy" and loses nothing', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const created = await page.request.post('/api/sketches', { data: { title: 'Raced sketch' } })
+  const created = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Raced sketch' } })
   const { id, version } = await created.json()
   await page.goto(`/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
 
   // Someone saves the same sketch elsewhere first.
-  const other = await page.request.patch(`/api/sketches/${id}`, { data: { version, title: 'Raced sketch (saved elsewhere)' } })
+  const other = await page.request.patch(`/api/sketches/${id}`, { headers: SAME_ORIGIN, data: { version, title: 'Raced sketch (saved elsewhere)' } })
   expect(other.status()).toBe(200)
 
   await page.getByTestId('tool-box').click()
@@ -216,7 +216,7 @@ test('a save that lost the race offers "Keep mine as a copy" and loses nothing',
 
 test('join and subtract parts, make a void, hollow a box, switch to US units, zoom at the pointer', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const created = await page.request.post('/api/sketches', { data: { title: 'Booleans' } })
+  const created = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Booleans' } })
   const { id } = await created.json()
   await page.goto(`/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
@@ -335,10 +335,10 @@ test('a vertex of a 2 000-vertex section can be dragged (its speed is measured b
   await signIn(page, 'engineer@millrace.test')
   const n = 2000
   const ring = Array.from({ length: n }, (_, i) => [500 * Math.cos((2 * Math.PI * i) / n), 500 * Math.sin((2 * Math.PI * i) / n)])
-  const created = await (await page.request.post('/api/sketches', { data: { title: '2000 vertices' } })).json()
+  const created = await (await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: '2000 vertices' } })).json()
   const full = await (await page.request.get(`/api/sketches/${created.id}`)).json()
   const document = { ...full.document, parts: [{ id: 'big', name: 'Polygon', outline: ring, holes: [], material: { name: 'Steel', E: 200000 }, shape: null }] }
-  expect((await page.request.patch(`/api/sketches/${created.id}`, { data: { version: created.version, document } })).status()).toBe(200)
+  expect((await page.request.patch(`/api/sketches/${created.id}`, { headers: SAME_ORIGIN, data: { version: created.version, document } })).status()).toBe(200)
   await page.goto(`/sketches/${created.id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
@@ -360,7 +360,7 @@ test('a vertex of a 2 000-vertex section can be dragged (its speed is measured b
 
 test('round and tube by centre and radius, rotation by the handle, space-drag pan, and a server geometry error on its vertex', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const created = await page.request.post('/api/sketches', { data: { title: 'Rounds and errors' } })
+  const created = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Rounds and errors' } })
   const { id } = await created.json()
   await page.goto(`/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
@@ -410,13 +410,13 @@ test('round and tube by centre and radius, rotation by the handle, space-drag pa
 
 test('after a lost race "Reload theirs" shows the version saved elsewhere', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
-  const { id, version } = await (await page.request.post('/api/sketches', { data: { title: 'Raced again' } })).json()
+  const { id, version } = await (await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Raced again' } })).json()
   await page.goto(`/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
   const full = await (await page.request.get(`/api/sketches/${id}`)).json()
   const theirs = { ...full.document, parts: [{ id: 'theirs', name: 'Theirs', outline: [[0, 0], [300, 0], [300, 10], [0, 10]], holes: [], material: { name: 'Steel', E: 200000 }, shape: null }] }
-  expect((await page.request.patch(`/api/sketches/${id}`, { data: { version, document: theirs } })).status()).toBe(200)
+  expect((await page.request.patch(`/api/sketches/${id}`, { headers: SAME_ORIGIN, data: { version, document: theirs } })).status()).toBe(200)
 
   await page.getByTestId('tool-box').click()
   const at = await transform(page)

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, shot, signIn } from './support/helpers'
+import { open, shot, signIn, SAME_ORIGIN } from './support/helpers'
 
 // A b × h rectangle centred on the origin, b along x. Values the test computes itself:
 // A = b·h; core edge on the x axis at b/6 (middle third rule, README "Method");
@@ -25,7 +25,7 @@ function rectangleDocument(noTension = false) {
 }
 
 async function newSketch(page: Page, title: string, document: unknown): Promise<string> {
-  const res = await page.request.post('/api/sketches', { data: { title, document } })
+  const res = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title, document } })
   expect(res.status()).toBe(201)
   return (await res.json()).id as string
 }

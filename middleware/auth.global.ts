@@ -1,6 +1,6 @@
 import { can, type Capability } from '#shared/auth/roles'
 
-const PUBLIC = new Set(['/sign-in', '/register'])
+const PUBLIC = new Set(['/sign-in', '/register', '/forgot-password', '/reset-password'])
 
 /**
  * Sends signed-out visitors to sign-in and keeps pages that need a capability (page meta

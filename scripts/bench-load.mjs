@@ -30,11 +30,13 @@ async function run(url, title, opts) {
 buildIfStale()
 const dir = mkdtempSync(join(tmpdir(), 'kernwise-load-'))
 const port = await freePort()
-const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef' })
+const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef',
+  // One bench account drives up to 10 connections: lift the per-account analysis limit (default 4) for it.
+  NUXT_ANALYSIS_PER_ACCOUNT: '16' })
 try {
-  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
+  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
   const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
-  const tok = await (await fetch(`${url}/api/tokens`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify({ name: 'bench' }) })).json()
+  const tok = await (await fetch(`${url}/api/tokens`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url, cookie }, body: JSON.stringify({ name: 'bench' }) })).json()
   const auth = { authorization: `Bearer ${tok.token}`, 'content-type': 'application/json' }
   for (let i = 0; i < 20; i++) await fetch(`${url}/api/sketches`, { method: 'POST', headers: auth, body: JSON.stringify({ title: `Bench ${i}` }) })
   const body = JSON.stringify({ parts: [{ outline: ring(1000, 200), holes: [], material: { E: 200000 } }], loads: [{ P: 320000, x: 40, y: 25 }] })
@@ -42,6 +44,15 @@ try {
   const health = await run(`${url}/api/health`, 'health')
   await run(`${url}/api/sketches`, 'sketch-list', { headers: auth })
   const analysis = await run(`${url}/api/analysis`, 'analysis-1000-vertices', { method: 'POST', headers: auth, body })
+  const four = await run(`${url}/api/analysis`, 'analysis-1000-vertices-4-clients', { method: 'POST', headers: auth, body, connections: 4 })
+  // Health while four heavy analyses (500-vertex parts x 40, about 20 000 vertices) keep the server busy.
+  const heavy = JSON.stringify({ parts: Array.from({ length: 40 }, (_, i) => ({ outline: ring(500, 40).map(([x, y]) => [x + (i % 8) * 100, y + Math.floor(i / 8) * 100]), holes: [], material: { E: 200000 } })), loads: [{ P: 1000, x: 350, y: 200 }] })
+  const busy = autocannon({ url: `${url}/api/analysis`, connections: 4, duration: DURATION, method: 'POST', headers: auth, body: heavy })
+  await new Promise(r => setTimeout(r, 500))
+  const during = await run(`${url}/api/health`, 'health-during-4-heavy-analyses', { connections: 1, duration: Math.max(1, DURATION - 2) })
+  const heavyResult = await busy
+  console.log(`heavy-analyses req_per_s=${heavyResult.requests.average.toFixed(1)} p50_ms=${heavyResult.latency.p50} non2xx=${heavyResult.non2xx}`)
+  console.log(`summary analysis_4_clients_req_per_s=${four.requests.average.toFixed(0)} health_p99_during_heavy_ms=${during.latency.p99}`)
   const ratio = health.latency.p50 > 0 ? analysis.latency.p50 / health.latency.p50 : NaN
   console.log(`analysis-vs-health p50_ratio=${Number.isFinite(ratio) ? ratio.toFixed(2) : 'n/a'} (a 1 000-vertex analysis costs this many health checks)`)
 } finally {

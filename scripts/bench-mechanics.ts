@@ -70,11 +70,11 @@ const dir = mkdtempSync(join(tmpdir(), 'kernwise-bench-'))
 const port = await freePort()
 const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'bench.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef' })
 try {
-  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: 'bench@mech.test', password: 'bench-password-123', name: 'Bench' }) })
+  const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email: 'bench@mech.test', password: 'bench-password-123', name: 'Bench' }) })
   const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
   const post = async (body: string) => {
     const t0 = performance.now()
-    const res = await fetch(`${url}/api/analysis`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body })
+    const res = await fetch(`${url}/api/analysis`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url, cookie }, body })
     await res.text()
     if (res.status !== 200) throw new Error(`analysis answered ${res.status}`)
     return performance.now() - t0

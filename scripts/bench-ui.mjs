@@ -160,7 +160,7 @@ async function main() {
   try {
     const context = await browser.newContext({ baseURL: url, viewport: { width: 1440, height: 900 } })
     const page = await context.newPage()
-    const login = await page.request.post('/api/auth/login', { data: { email: EMAIL, password: PASSWORD } })
+    const login = await page.request.post('/api/auth/login', { headers: { origin: url }, data: { email: EMAIL, password: PASSWORD } })
     if (!login.ok()) throw new Error(`sign-in failed: ${login.status()}`)
     for (const n of SIZES) {
       const document = {
@@ -172,7 +172,7 @@ async function main() {
         // BENCH_NO_TENSION=1 drags in the no-tension (partial contact, Newton per frame) view instead.
         settings: { noTension: !!process.env.BENCH_NO_TENSION },
       }
-      const res = await page.request.post('/api/sketches', { data: { title: `bench-ui ${n}`, document } })
+      const res = await page.request.post('/api/sketches', { headers: { origin: url }, data: { title: `bench-ui ${n}`, document } })
       if (res.status() !== 201) throw new Error(`creating the sketch failed: ${res.status()} ${await res.text()}`)
       const { id } = await res.json()
       const path = PAGE ? PAGE.replace('ID', id) : `/sketches/${id}`

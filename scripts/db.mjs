@@ -1,4 +1,4 @@
-// npm run db:seed | db:reset  (NUXT_DB_PATH picks the database file)
+// npm run db:seed | db:reset | db:passwords | db:backup | db:restore  (NUXT_DB_PATH picks the database file)
 import { spawnSync } from 'node:child_process'
 import { fileURLToPath } from 'node:url'
 

@@ -15,6 +15,11 @@ export async function open(page: Page, path: string): Promise<void> {
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
 }
 
+/** The app's origin: page.request calls send it as a browser would (the server's same-origin check). */
+export const ORIGIN = `http://127.0.0.1:${Number(process.env.E2E_PORT || 3217)}`
+/** Headers for page.request.post/patch/delete: a same-origin Origin. */
+export const SAME_ORIGIN = { origin: ORIGIN }
+
 export const DEMO_PASSWORD = 'millrace-demo-2026'
 
 /** Signs in through the form as a demo account. */

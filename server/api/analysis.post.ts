@@ -16,7 +16,7 @@ export default defineEventHandler(async (event) => {
   if (vertices > MAX_VERTICES) {
     throw createError({ statusCode: 413, message: `The section has ${vertices} vertices; the limit is ${MAX_VERTICES}. Use a coarser chord tolerance for arcs.` })
   }
-  const result = withSectionErrors(() => analyseSection(body))
+  const result = await analyseInPool(event, body)
   // The regions are the validated input rings (or Boolean results of them), so the walk skips
   // them; the vertex stresses are checked with a flat loop.
   const { regions: _regions, stress, ...rest } = result

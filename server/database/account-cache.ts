@@ -2,7 +2,7 @@ import type { ModelStatic, Model, Transaction } from 'sequelize'
 
 /**
  * What the server remembers between requests about who is asking: accounts by id, API tokens by
- * hash, and sealed session cookies by their text. Every write to the users or api_tokens tables
+ * hash, session records by id, and sealed session cookies by their text. Every write to the users, api_tokens or sessions tables
  * through this server's models clears the accounts and tokens at once (model hooks, again after a
  * transaction commits), so a role change or a revoked token still counts on the very next
  * request. Writes from another process (the db scripts) bypass the hooks; the short lifetimes
@@ -26,12 +26,27 @@ export interface CachedToken {
   id: string
   userId: string
   lastUsedAt: Date | null
+  expiresAt: Date | null
+}
+
+/** What a sealed session cookie holds, as requireUser needs it. */
+export interface SealedSession {
+  userId: string
+  sessionId: string
+}
+
+/** A session record as requireUser needs it. */
+export interface CachedSessionRecord {
+  userId: string
+  lastSeenAt: Date
+  expiresAt: Date
 }
 
 let generation = 0
 const accounts = new Map<string, Entry<unknown>>()
 const tokens = new Map<string, Entry<CachedToken>>()
-const sessions = new Map<string, Entry<string | null>>()
+const sessions = new Map<string, Entry<SealedSession | null>>()
+const records = new Map<string, Entry<CachedSessionRecord>>()
 
 function read<T>(map: Map<string, Entry<T>>, key: string): T | undefined {
   const hit = map.get(key)
@@ -69,8 +84,13 @@ export function cachedToken(hash: string, load: () => Promise<CachedToken | null
   return remembered(tokens as Map<string, Entry<CachedToken | null>>, hash, load)
 }
 
-/** The user id sealed in this session cookie (null for an empty or invalid one), or undefined if not known. */
-export function cachedSession(sealed: string): string | null | undefined {
+/** The session record with this id (null when ended), remembered for a few seconds like accounts. */
+export function cachedSessionRecord(id: string, load: () => Promise<CachedSessionRecord | null>): Promise<CachedSessionRecord | null> {
+  return remembered(records as Map<string, Entry<CachedSessionRecord | null>>, id, load)
+}
+
+/** What this session cookie holds (null for an empty or invalid one), or undefined if not known. */
+export function cachedSession(sealed: string): SealedSession | null | undefined {
   return read(sessions, sealed)
 }
 
@@ -78,10 +98,10 @@ export function cachedSession(sealed: string): string | null | undefined {
  * Remembers what a sealed session cookie holds, until the earlier of SESSION_TTL_MS and the
  * expiry the seal carries in clear (the sixth `*`-separated field of an iron seal, in ms).
  */
-export function rememberSession(sealed: string, userId: string | null): void {
+export function rememberSession(sealed: string, content: SealedSession | null): void {
   const sealExpiry = Number(sealed.split('*')[5])
   const until = Math.min(Date.now() + SESSION_TTL_MS, sealExpiry > 0 ? sealExpiry : Number.POSITIVE_INFINITY)
-  write(sessions, sealed, userId, until)
+  write(sessions, sealed, content, until)
 }
 
 /** Forgets one session cookie (at sign-out). */
@@ -89,11 +109,12 @@ export function forgetSession(sealed: string): void {
   sessions.delete(sealed)
 }
 
-/** Forgets every remembered account and token (any write to their tables). */
+/** Forgets every remembered account, token and session record (any write to their tables). */
 export function forgetAccounts(): void {
   generation++
   accounts.clear()
   tokens.clear()
+  records.clear()
 }
 
 const WRITE_HOOKS = ['afterCreate', 'afterUpdate', 'afterSave', 'afterDestroy', 'afterUpsert', 'afterBulkCreate', 'afterBulkUpdate', 'afterBulkDestroy'] as const

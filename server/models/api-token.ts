@@ -9,11 +9,13 @@ export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttr
   /** The first characters of the token, so a user can tell tokens apart. */
   declare prefix: string
   declare lastUsedAt: Date | null
+  /** After this the token answers 401; null: no expiry. */
+  declare expiresAt: Date | null
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 
   toPublic() {
-    return { id: this.id, name: this.name, prefix: this.prefix, lastUsedAt: this.lastUsedAt, createdAt: this.createdAt }
+    return { id: this.id, name: this.name, prefix: this.prefix, lastUsedAt: this.lastUsedAt, expiresAt: this.expiresAt, createdAt: this.createdAt }
   }
 }
 
@@ -26,6 +28,7 @@ export function initApiToken(sequelize: Sequelize): typeof ApiToken {
       tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
       prefix: { type: DataTypes.STRING(16), allowNull: false },
       lastUsedAt: { type: DataTypes.DATE, allowNull: true },
+      expiresAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

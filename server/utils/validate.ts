@@ -1,5 +1,6 @@
 import type { H3Event } from 'h3'
 import type { z } from 'zod'
+import { findUnsafeText } from '../../shared/text/safe-text'
 
 /** Turns zod issues into one sentence a person can act on: "email: Enter a valid e-mail address". */
 export function describeIssues(error: z.ZodError): string {
@@ -29,12 +30,17 @@ export function parseOr400<S extends z.ZodType>(schema: S, value: unknown): z.ou
 export async function readJsonBody(event: H3Event): Promise<unknown> {
   const raw = await readRawBody(event, 'utf8')
   if (!raw || !raw.trim()) return {}
+  let value: unknown
   try {
-    return JSON.parse(raw)
+    value = JSON.parse(raw)
   } catch (error) {
     const detail = error instanceof SyntaxError ? ` (${error.message})` : ''
     throw createError({ statusCode: 400, statusMessage: 'Bad Request', message: `The request body is not valid JSON${detail}.` })
   }
+  // Every text field at once: no control characters or unpaired surrogates reach the database.
+  const unsafe = findUnsafeText(value)
+  if (unsafe) throw createError({ statusCode: 400, statusMessage: 'Bad Request', message: `${unsafe.path || 'The body'}: ${unsafe.problem}.`, data: { path: unsafe.path } })
+  return value
 }
 
 /** The JSON body checked with `schema`, with Kernwise's error messages; an unreadable body is a 400 too. */

@@ -4,7 +4,7 @@ export default defineEventHandler(async (event) => {
   const pub = user.toPublic()
   if (!getHeader(event, 'authorization')) {
     const session = await getUserSession(event)
-    if (session.user?.role !== pub.role || session.user?.name !== pub.name) await setUserSession(event, { user: pub })
+    if (session.user?.role !== pub.role || session.user?.name !== pub.name) await setUserSession(event, { user: pub }, cookieConfig(event))
   }
   return { user: pub }
 })

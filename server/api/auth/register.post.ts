@@ -1,8 +1,9 @@
 import { RegisterBody } from '../../../shared/auth/schemas'
 
-/** Creates an account and signs it in. The first account of an empty workspace is its admin. */
+/** Creates an account and signs it in (10 an address in 10 minutes). The first account of an empty workspace is its admin. */
 export default defineEventHandler(async (event) => {
   const body = await readBodyAs(event, RegisterBody)
+  await assertRegistrationAllowed(event, clientAddress(event))
   const db = await useDb()
   const passwordHash = await hashPassword(body.password)
   const user = await db.sequelize.transaction(async (transaction) => {

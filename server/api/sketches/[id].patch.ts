@@ -23,10 +23,14 @@ export default defineEventHandler(async (event) => {
     { where: { id: sketch.id, ownerId: user.id, version: body.version, deletedAt: { [Op.is]: null } } },
   )
   if (count === 0) {
+    // Report the version stored now, not the one read before the update (another save may have landed in between).
+    const stored = await db.Sketch.findOne({ where: { id: sketch.id, ownerId: user.id }, attributes: ['version', 'deletedAt'] })
+    if (!stored || stored.deletedAt) throw createError({ statusCode: 404, message: 'Sketch not found (it was deleted meanwhile).' })
     throw createError({
       statusCode: 409,
-      message: `This sketch was saved elsewhere (now version ${sketch.version}, you edited version ${body.version}). Reload it, or keep your work as a copy.`,
-      data: { currentVersion: sketch.version },
+      statusMessage: 'Conflict',
+      message: `This sketch was saved elsewhere (now version ${stored.version}, you edited version ${body.version}). Reload it, or keep your work as a copy.`,
+      data: { currentVersion: stored.version },
     })
   }
   await sketch.reload()

@@ -1,5 +1,6 @@
 import { Op } from 'sequelize'
 import { BIN_DAYS, ListSketchesQuery } from '../../../shared/sketch/api'
+import { likeIgnoringCase } from '../../database/connection'
 
 const COLUMN = { updated: 'updatedAt', created: 'createdAt', title: 'title', project: 'project' } as const
 
@@ -16,7 +17,8 @@ export default defineEventHandler(async (event) => {
   const q = query.q?.trim()
   if (q) {
     const like = `%${q.replace(/[\\%_]/g, c => `\\${c}`)}%`
-    where[Op.or] = ['title', 'project', 'description'].map(col => ({ [col]: { [Op.like]: like } }))
+    const op = likeIgnoringCase(db.sequelize)
+    where[Op.or] = ['title', 'project', 'description'].map(col => ({ [col]: { [op]: like } }))
   }
   const order = query.order ?? (query.sort === 'title' || query.sort === 'project' ? 'asc' : 'desc')
   const rows = await db.Sketch.findAll({ where, order: binned ? [['deletedAt', 'DESC']] : [[COLUMN[query.sort], order.toUpperCase()]] })

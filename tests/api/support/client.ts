@@ -1,4 +1,8 @@
-/** A tiny HTTP client for API tests: JSON in and out, one cookie jar per client. */
+/**
+ * A tiny HTTP client for API tests: JSON in and out, one cookie jar per client. Like a browser on
+ * the app's own page it sends `Origin` on every request that is not a GET or HEAD (the server's
+ * same-origin check); pass `origin: ''` in `headers` to leave it out.
+ */
 export class Client {
   private cookies = new Map<string, string>()
   constructor(private readonly base: () => string, private readonly token?: string) {}
@@ -9,8 +13,11 @@ export class Client {
   }
 
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
-    const h: Record<string, string> = { accept: 'application/json', ...headers }
+    const h: Record<string, string> = { accept: 'application/json' }
+    if (method !== 'GET' && method !== 'HEAD') h.origin = this.base()
     if (body !== undefined && typeof body !== 'string') h['content-type'] = 'application/json'
+    Object.assign(h, headers)
+    if (h.origin === '') delete h.origin
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
     if (this.token) h.authorization = `Bearer ${this.token}`
     const res = await fetch(this.base() + path, {
@@ -30,6 +37,20 @@ export class Client {
     let json: any = null
     try { json = text ? JSON.parse(text) : null } catch { json = { raw: text } }
     return { status: res.status, body: json, headers: res.headers, text }
+  }
+
+  /** The cookie header this client would send, to replay it from elsewhere (a "saved" cookie). */
+  cookieHeader(): string {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
+  }
+
+  /** Uses a cookie header saved from another client. */
+  useCookieHeader(header: string): this {
+    for (const pair of header.split('; ').filter(Boolean)) {
+      const i = pair.indexOf('=')
+      this.cookies.set(pair.slice(0, i), pair.slice(i + 1))
+    }
+    return this
   }
 
   get(path: string) { return this.request('GET', path) }
