@@ -2,6 +2,7 @@ import { z } from 'zod'
 import type { Ring } from '../geometry/types'
 import type { Point } from '../geometry/types'
 import type { AnalysisOutput } from '../mechanics/analyze'
+import { PoissonRatio, TorsionRequestFields } from './torsion-contract'
 
 const finite = (what: string) => z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be a finite number`)
 /**
@@ -24,6 +25,7 @@ export const AnalysisMaterial = z.object({
   E: finite('E').refine(v => v > 0, 'E must be positive (MPa)').default(200_000),
   fy: finite('fy').refine(v => v > 0, 'fy must be positive (MPa)').optional(),
   density: finite('density').refine(v => v > 0, 'density must be positive (kg/m³)').optional(),
+  nu: PoissonRatio,
 })
 
 /** Body of POST /api/analysis (mm, N, MPa; P > 0 is compression). */
@@ -46,6 +48,7 @@ export const AnalysisRequest = z.object({
    * plane at each vertex). For a section of thousands of vertices they are most of the answer.
    */
   omit: z.array(z.enum(['kern', 'vertexStresses'], { error: 'omit lists "kern" and/or "vertexStresses"' })).max(2).default([]),
+  ...TorsionRequestFields,
 })
 export type AnalysisRequestBody = z.input<typeof AnalysisRequest>
 

@@ -6,10 +6,11 @@ import { sectionProperties } from './properties'
 import { shearFlows } from './shear'
 import { slenderness, type SlendernessResult } from './slenderness'
 import { sectionStress } from './stress'
+import { torsionAnalysis, type TorsionInput, type TorsionResult } from './torsion/analysis'
 import type { AppliedMoments, ContactResult, PartInput, PointLoad, PreparedSection, SectionProperties, ShearFlowResult, StressResult } from './types'
 
 /** Everything one analysis needs (mm, N, N·mm, MPa; P > 0 is compression). */
-export interface AnalysisInput {
+export interface AnalysisInput extends TorsionInput {
   parts: readonly PartInput[]
   loads?: readonly PointLoad[]
   moments?: AppliedMoments
@@ -42,6 +43,8 @@ export interface AnalysisOutput {
   slenderness: SlendernessResult | null
   vertexCount: number
   warnings: string[]
+  /** Saint-Venant torsion and shear, when the input asks for it (`torsion: true`). */
+  torsion?: TorsionResult
 }
 
 /**
@@ -95,5 +98,6 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     slenderness: slender,
     vertexCount,
     warnings,
+    ...(input.torsion ? { torsion: torsionAnalysis(prepared, { mesh: input.torsionMesh, study: input.torsionStudy, loads: input.torsionLoads }) } : {}),
   }
 }

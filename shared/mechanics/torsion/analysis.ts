@@ -17,6 +17,14 @@ export interface TorsionOptions {
   readonly loads?: TorsionLoads
 }
 
+/** The torsion fields of an analysis request (see shared/analysis/torsion-contract.ts). */
+export interface TorsionInput {
+  torsion?: boolean
+  torsionMesh?: TorsionMeshDensity
+  torsionStudy?: boolean
+  torsionLoads?: TorsionLoads
+}
+
 /** J and the shear centre on one mesh, for the mesh study. */
 export interface TorsionStudyRow {
   density: TorsionMeshDensity

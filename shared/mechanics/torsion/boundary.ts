@@ -123,14 +123,35 @@ export function rowCrossings(xy: readonly number[], rings: readonly (readonly nu
   return xs.sort((u, v) => u - v)
 }
 
-/** True when (x, y) lies inside the polygons (even-odd over all their rings; mm). */
-export function insideRings(rings: readonly (readonly (readonly [number, number])[])[], x: number, y: number): boolean {
-  let inside = false
+/**
+ * A point-in-section test for many points: the ring edges bucketed by horizontal bands, so each
+ * query looks only at the edges of its band. Even-odd over all rings given (mm).
+ */
+export function insideTester(rings: readonly (readonly (readonly [number, number])[])[]): (x: number, y: number) => boolean {
+  let minY = Infinity; let maxY = -Infinity; let edges = 0
+  for (const ring of rings) for (const [, y] of ring) { minY = Math.min(minY, y); maxY = Math.max(maxY, y); edges++ }
+  const bands = Math.max(1, Math.min(4096, Math.round(Math.sqrt(edges) * 2)))
+  const height = (maxY - minY) / bands || 1
+  const lists: number[][] = Array.from({ length: bands }, () => [])
+  const flat: number[] = []
   for (const ring of rings) {
     for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
       const [xi, yi] = ring[i]!; const [xj, yj] = ring[j]!
-      if ((yi > y) !== (yj > y) && x < xj + ((y - yj) / (yi - yj)) * (xi - xj)) inside = !inside
+      const id = flat.length
+      flat.push(xi, yi, xj, yj)
+      const b0 = Math.max(0, Math.floor((Math.min(yi, yj) - minY) / height))
+      const b1 = Math.min(bands - 1, Math.floor((Math.max(yi, yj) - minY) / height))
+      for (let b = b0; b <= b1; b++) lists[b]!.push(id)
     }
   }
-  return inside
+  return (x, y) => {
+    if (!(y >= minY && y <= maxY)) return false
+    const list = lists[Math.min(bands - 1, Math.floor((y - minY) / height))]!
+    let inside = false
+    for (const id of list) {
+      const xi = flat[id]!; const yi = flat[id + 1]!; const xj = flat[id + 2]!; const yj = flat[id + 3]!
+      if ((yi > y) !== (yj > y) && x < xj + ((y - yj) / (yi - yj)) * (xi - xj)) inside = !inside
+    }
+    return inside
+  }
 }

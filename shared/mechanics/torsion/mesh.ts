@@ -1,6 +1,6 @@
 import Constrainautor from '@kninnug/constrainautor'
 import Delaunator from 'delaunator'
-import { boundaryGraph, insideRings, rowCrossings, type BoundaryGraph } from './boundary'
+import { boundaryGraph, insideTester, rowCrossings, type BoundaryGraph } from './boundary'
 import { meshSize, thinnestWall } from './mesh-size'
 import type { TorsionMeshDensity, TorsionRegion, TriMesh } from './types'
 
@@ -33,13 +33,14 @@ export function meshSection(regions: readonly TorsionRegion[], density: TorsionM
   // Boundary pieces already shorter than h/2 are not split again: the input's own fine arcs set
   // the element size there, and splitting them further only cascades.
   const minLen = Math.max(h / 2, graph.size * 1e-7)
-  const allRings = regionRings.flat()
-  let tri = triangulate(pts, sub, regionRings)
+  const inRegion = regionRings.map(rings => insideTester(rings))
+  const inSection = insideTester(regionRings.flat())
+  let tri = triangulate(pts, sub, inRegion)
   for (let round = 0; round < MAX_ROUNDS; round++) {
-    const added = refineOnce(pts, sub, tri, allRings, h, maxArea, minLen)
+    const added = refineOnce(pts, sub, tri, inSection, h, maxArea, minLen)
     if (added.split.size === 0 && added.points === 0) break
     sub = applySplits(pts, sub, added.split)
-    tri = triangulate(pts, sub, regionRings)
+    tri = triangulate(pts, sub, inRegion)
   }
   return toSixNode(pts, tri.triangles, tri.region, h)
 }
@@ -112,7 +113,7 @@ function clearOf(grid: Map<string, number[]>, pts: readonly number[], x: number,
 }
 
 /** Constrained Delaunay triangulation of the points with the boundary pieces, triangles classified by region. */
-function triangulate(pts: readonly number[], sub: readonly number[], regionRings: readonly Rings[]): Triangulation {
+function triangulate(pts: readonly number[], sub: readonly number[], inRegion: readonly ((x: number, y: number) => boolean)[]): Triangulation {
   const del = new Delaunator(Float64Array.from(pts))
   const edges: [number, number][] = []
   for (let s = 0; s < sub.length; s += 2) edges.push([sub[s]!, sub[s + 1]!])
@@ -147,7 +148,7 @@ function triangulate(pts: readonly number[], sub: readonly number[], regionRings
     }
     const [cx, cy] = triCentroid(pts, triangles, best)
     let which = -1
-    for (let r = 0; r < regionRings.length; r++) if (insideRings(regionRings[r]!, cx, cy)) { which = r; break }
+    for (let r = 0; r < inRegion.length; r++) if (inRegion[r]!(cx, cy)) { which = r; break }
     for (const t of members) region[t] = which
   }
   return { triangles, region }
@@ -160,7 +161,7 @@ interface Additions {
 }
 
 /** One refinement pass: adds circumcentres of poor triangles to pts, or marks encroached pieces to split. */
-function refineOnce(pts: number[], sub: readonly number[], tri: Triangulation, rings: Rings, h: number, maxArea: number, minLen: number): Additions {
+function refineOnce(pts: number[], sub: readonly number[], tri: Triangulation, inside: (x: number, y: number) => boolean, h: number, maxArea: number, minLen: number): Additions {
   const cell = h
   const pieces = new Map<string, number[]>()
   for (let s = 0; s < sub.length; s += 2) {
@@ -200,7 +201,7 @@ function refineOnce(pts: number[], sub: readonly number[], tri: Triangulation, r
       continue
     }
     let px = ox; let py = oy
-    if (!insideRings(rings, px, py)) {
+    if (!inside(px, py)) {
       px = (ax + bx + cx) / 3
       py = (ay + by + cy) / 3
     }

@@ -1,4 +1,5 @@
-import { reverseCuthillMcKee, permute } from './ordering'
+import { ENVELOPE_MAX_ENTRIES, ENVELOPE_MAX_FLOPS, envelopeCholesky, envelopeCost } from './envelope'
+import { permute, reverseCuthillMcKee } from './ordering'
 import { conjugateGradients, incompleteCholesky, type SolveInfo } from './pcg'
 import { csrAddElement, csrPattern, csrPin, type Csr } from './sparse'
 import { GAUSS6, shapeEvaluator } from './tri6'
@@ -155,15 +156,20 @@ export function solveSectionFe(mesh: TriMesh, regions: readonly TorsionRegion[])
   }
 }
 
-/** A solver for A·x = b in reverse Cuthill-McKee order, IC(0)-preconditioned conjugate gradients. */
+/**
+ * A solver for A·x = b in reverse Cuthill-McKee order: the direct envelope Cholesky factor when
+ * the envelope is small enough (thin-walled sections), else IC(0)-preconditioned conjugate gradients.
+ */
 function symmetricSolver(a: Csr): (b: Float64Array, x: Float64Array) => SolveInfo {
   const perm = reverseCuthillMcKee(a)
   const pa = permute(a, perm)
-  const m = incompleteCholesky(pa)
+  const cost = envelopeCost(pa)
+  const direct = cost.entries <= ENVELOPE_MAX_ENTRIES && cost.flops <= ENVELOPE_MAX_FLOPS ? envelopeCholesky(pa) : null
+  const m = direct ? null : incompleteCholesky(pa)
   return (b, x) => {
     const pb = new Float64Array(a.n); const px = new Float64Array(a.n)
     for (let k = 0; k < a.n; k++) pb[k] = b[perm[k]!]!
-    const info = conjugateGradients(pa, pb, px, m, 1e-9)
+    const info = direct ? direct(pb, px) : conjugateGradients(pa, pb, px, m!, 1e-9)
     for (let k = 0; k < a.n; k++) x[perm[k]!] = px[k]!
     return info
   }
