@@ -57,7 +57,8 @@ export interface TorsionResult {
   warnings: string[]
 }
 
-const FINER: Record<TorsionMeshDensity, TorsionMeshDensity> = { coarse: 'normal', normal: 'fine', fine: 'fine' }
+/** The other density of the mesh study: the next coarser one (coarse pairs with normal). */
+const STUDY_PAIR: Record<TorsionMeshDensity, TorsionMeshDensity> = { coarse: 'normal', normal: 'coarse', fine: 'normal' }
 
 /**
  * Saint-Venant torsion and shear of a prepared section by the finite element method on the
@@ -98,7 +99,7 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
   }
   if (!result.converged) warnings.push('The torsion solver stopped before its tolerance: treat J, Cw and the shear centre as approximate.')
   if (options.study) {
-    const other = density === 'fine' ? 'normal' : FINER[density]
+    const other = STUDY_PAIR[density]
     const otherMesh = meshSection(regions, other)
     const otherSol = solveSectionFe(otherMesh, regions)
     const rows: TorsionStudyRow[] = [
