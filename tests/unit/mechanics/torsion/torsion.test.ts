@@ -3,6 +3,7 @@ import type { Point, Ring } from '../../../../shared/geometry/types'
 import { prepareSection } from '../../../../shared/mechanics/prepare'
 import { torsionAnalysis } from '../../../../shared/mechanics/torsion/analysis'
 import type { PartInput } from '../../../../shared/mechanics/types'
+import { ishape } from '../../../../shared/shapes/ishape'
 import { expectClose } from '../../../support/expect-close'
 import { rectRing } from '../../../support/sections'
 
@@ -136,6 +137,15 @@ describe('torsionAnalysis: shear centre and warping constant', () => {
   })
 })
 
+describe('torsionAnalysis: the small warping constant of an angle', () => {
+  it('is about (t³/36)(b₁³ + b₂³) with b along the leg mid-lines (AISC Design Guide 9, from memory)', () => {
+    const th = 5
+    const t = torsion([part([[0, 0], [100, 0], [100, th], [th, th], [th, 100], [0, 100]])])
+    const b = 100 - th / 2
+    expectClose(t.Cw, ((th ** 3) / 36) * (2 * b ** 3), 0.03)
+  })
+})
+
 describe('torsionAnalysis: shear areas and shear stresses', () => {
   it('gives a rectangle the shear area 5/6·A with ν = 0 (parabolic shear stress, exact)', () => {
     const t = torsion([part(rectRing([0, 0, 40, 80]), [], { E: 200_000, nu: 0 })])
@@ -183,5 +193,14 @@ describe('torsionAnalysis: mesh and options', () => {
     const t = torsion([part(rectRing([0, 0, 40, 20])), part(rectRing([100, 0, 140, 20]))])
     expectClose(t.J, 2 * rectangleJ(40, 20), 3e-3)
     expect(t.warnings.join(' ')).toMatch(/separate pieces/)
+  })
+})
+
+describe('torsionAnalysis: a rolled section with root fillets', () => {
+  it('gives an IPE 200 about the published It = 6.98 cm⁴ and Iw = 12.99 × 10³ cm⁶ (European section tables, from memory)', () => {
+    const g = ishape({ h: 200, b: 100, tw: 5.6, tf: 8.5, r: 12 })
+    const t = torsion([part(g.outline, [...g.holes])])
+    expectClose(t.J, 6.98e4, 0.03)
+    expectClose(t.Cw, 12.99e9, 0.03)
   })
 })
