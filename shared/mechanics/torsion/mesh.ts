@@ -2,6 +2,7 @@ import Constrainautor from '@kninnug/constrainautor'
 import Delaunator from 'delaunator'
 import { boundaryGraph, insideTester, rowCrossings, type BoundaryGraph } from './boundary'
 import { meshSize, thinnestWall } from './mesh-size'
+import { simplifyForMesh } from './simplify'
 import type { TorsionMeshDensity, TorsionRegion, TriMesh } from './types'
 
 /** Quality bound of the refinement: no angle below this (degrees) where the input allows it. */
@@ -19,12 +20,14 @@ type Rings = (readonly (readonly [number, number])[])[]
  * an angle under 20° or an area over twice the target. The target edge length follows the
  * thinnest wall and the density (see meshSize).
  */
-export function meshSection(regions: readonly TorsionRegion[], density: TorsionMeshDensity = 'normal'): TriMesh {
-  const graph = boundaryGraph(regions)
+export function meshSection(input: readonly TorsionRegion[], density: TorsionMeshDensity = 'normal'): TriMesh {
   let area = 0
+  for (const r of input) for (const poly of r.polygons) for (const ring of poly) area += signedArea(ring as Rings[number])
+  const h = meshSize(Math.abs(area), thinnestWall(boundaryGraph(input)), density)
+  // A deviation of h/400 changes J by about that fraction of the wall: far below the mesh error.
+  const regions = simplifyForMesh(input, h / 400, h / 2)
+  const graph = boundaryGraph(regions)
   const regionRings: Rings[] = regions.map(r => r.polygons.flatMap(poly => poly.map(ring => ring as readonly (readonly [number, number])[])))
-  for (const rings of regionRings) area += Math.abs(rings.reduce((sum, ring) => sum + signedArea(ring), 0))
-  const h = meshSize(area, thinnestWall(graph), density)
   const pts: number[] = graph.xy.slice()
   let sub = subdivide(pts, graph.seg, h)
   addLattice(pts, graph, sub, h)
