@@ -204,3 +204,24 @@ describe('torsionAnalysis: a rolled section with root fillets', () => {
     expectClose(t.Cw, 12.99e9, 0.03)
   })
 })
+
+describe('torsionAnalysis: several materials', () => {
+  it('gives a steel tube round an aluminium bar J = (G₁·Ip₁ + G₂·Ip₂)/G_ref (concentric circles: no warping, exact)', () => {
+    const n = 192
+    const tube = part(circleRing(50, n), [circleRing(40, n, true)], { E: 200_000, nu: 0.3 })
+    // A bar 1 mm clear of the bore (a core filling the bore exactly trips the Boolean step).
+    const core = part(circleRing(39, n), [], { E: 70_000, nu: 0.33 })
+    const t = torsion([tube, core])
+    const gSteel = 200_000 / 2.6; const gAl = 70_000 / 2.66
+    const expected = (gSteel * (ngonIp(n, 50) - ngonIp(n, 40)) + gAl * ngonIp(n, 39)) / gSteel
+    expectClose(t.J, expected, 3e-3)
+    expect(t.equivalent).toBe(true)
+  })
+
+  it('meshes a plate on part of a flange conformingly: two materials of equal E and G give the one-material J', () => {
+    const flange = rectRing([0, 0, 100, 10]); const plate = rectRing([30, 10, 70, 20])
+    const one = torsion([part(flange), part(plate)])
+    const two = torsion([part(flange), part(plate, [], { E: 200_000, nu: 0.3, fy: 235 })])
+    expectClose(two.J, one.J, 2e-3)
+  })
+})
