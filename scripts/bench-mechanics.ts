@@ -11,8 +11,6 @@ import { solveContact } from '../shared/mechanics/contact'
 import { kernPolygon } from '../shared/mechanics/kern'
 import { prepareSection } from '../shared/mechanics/prepare'
 import { sectionProperties } from '../shared/mechanics/properties'
-import { torsionAnalysis } from '../shared/mechanics/torsion/analysis'
-import { ishape } from '../shared/shapes/ishape'
 // @ts-expect-error plain ESM helper without types
 import { buildIfStale, freePort, startServer } from './lib.mjs'
 
@@ -112,6 +110,9 @@ try {
 // Torsion (finite elements on the section), after the server runs so its meshes do not weigh on
 // the figures above: a thin tube and a wavy solid of 2 000 vertices, and a
 // rolled I with root fillets, at each mesh density: vertex, node and element counts, times.
+// Loaded here, not at the top: the figures above then run with the same modules as before torsion.
+const { torsionAnalysis } = await import('../shared/mechanics/torsion/analysis')
+const { ishape } = await import('../shared/shapes/ishape')
 const tubeOf = (n: number, r: number, t: number) => [wavyRing(n / 2, r).map(([x, y]) => [x, y] as Point), wavyRing(n / 2, r - t).map(([x, y]) => [x, y] as Point).reverse()]
 const ipe = ishape({ h: 200, b: 100, tw: 5.6, tf: 8.5, r: 12 })
 const torsionCases: [string, { outline: Point[]; holes?: Point[][] }][] = [

@@ -63,7 +63,8 @@ const STUDY_PAIR: Record<TorsionMeshDensity, TorsionMeshDensity> = { coarse: 'no
 /**
  * Saint-Venant torsion and shear of a prepared section by the finite element method on the
  * section (six-node triangles; see section-fe.ts). Elastic, uniform torsion only. Throws
- * SectionError when the section has more than TORSION_MAX_VERTICES vertices.
+ * SectionError when the section has more than TORSION_MAX_VERTICES vertices or a material's
+ * Poisson's ratio is outside 0 ≤ ν < 0.5.
  */
 export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptions = {}): TorsionResult {
   let vertices = 0
@@ -73,6 +74,10 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
   }
   const [ox, oy] = prepared.origin
   const nuOf = (m: Material) => (m as Material & { nu?: number }).nu ?? DEFAULT_POISSON
+  for (const r of prepared.regions) {
+    const nu = nuOf(r.material)
+    if (!(nu >= 0 && nu < 0.5)) throw new SectionError(`${r.material.name ?? 'A material'}: Poisson's ratio nu must be at least 0 and below 0.5 (got ${String(nu)}).`)
+  }
   const ref = prepared.regions.find(r => r.material.E === prepared.referenceE)
   const referenceG = prepared.referenceE / (2 * (1 + (ref ? nuOf(ref.material) : DEFAULT_POISSON)))
   const regions: TorsionRegion[] = prepared.regions.map(r => ({

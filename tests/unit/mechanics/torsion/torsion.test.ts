@@ -225,3 +225,9 @@ describe('torsionAnalysis: several materials', () => {
     expectClose(two.J, one.J, 2e-3)
   })
 })
+
+describe('torsionAnalysis: bad input', () => {
+  it('rejects a Poisson ratio outside 0 ≤ ν < 0.5 with a SectionError that says so', () => {
+    expect(() => torsion([part(rectRing([0, 0, 10, 10]), [], { E: 200_000, nu: 0.5 })])).toThrow(/Poisson/)
+  })
+})
