@@ -25,13 +25,17 @@ export function useTorsion() {
   return useState<TorsionState>('kw-torsion', () => ({ result: null, pending: false, error: null, revision: -1, ms: 0, mesh: 'normal', study: false, showField: false, T: 0 }))
 }
 
-/** Quiet time after the last bending answer before torsion is asked for, so a burst of edits asks once. */
-const SETTLE_MS = 250
+/**
+ * Quiet time after the last bending answer before torsion is asked for, so a burst of edits asks
+ * once: the server solves on the same thread as the live analysis and the autosave.
+ */
+const SETTLE_MS = 500
 
 /**
  * Asks POST /api/analysis for torsion in a request of its own, after the live (bending) answer
- * for the same revision is in, so it never delays the live properties; a newer revision aborts
- * the request in flight, and only the answer for the current revision is shown.
+ * for the same revision is in, so it never delays the live properties. At most one torsion
+ * request is in flight (an aborted fetch would not stop the server's solve): a change made
+ * meanwhile is asked for when it returns, and only the answer for the current revision is shown.
  */
 export function useLiveTorsion() {
   const state = useTorsion()
@@ -39,10 +43,12 @@ export function useLiveTorsion() {
   const sketch = useSketchStore()
   let timer: ReturnType<typeof setTimeout> | null = null
   let controller: AbortController | null = null
+  let again = false
 
-  async function run(revision: number): Promise<void> {
+  async function run(): Promise<void> {
+    if (controller) { again = true; return }
+    const revision = sketch.revision
     const request = analysisRequestFor(sketch.doc)
-    controller?.abort()
     if (!request) { state.value = { ...state.value, result: null, pending: false, error: null, revision }; return }
     const s = state.value
     const body: AnalysisRequestBody = {
@@ -62,25 +68,26 @@ export function useLiveTorsion() {
       const data = await res.json().catch(() => null)
       if (controller !== mine) return
       if (!res.ok || !data?.torsion) throw new Error((data as { message?: string } | null)?.message ?? `Torsion failed (HTTP ${res.status}).`)
-      state.value = { ...state.value, result: data.torsion as TorsionResult, error: null, pending: false, revision, ms: performance.now() - t0 }
+      state.value = { ...state.value, result: data.torsion as TorsionResult, error: null, revision, ms: performance.now() - t0 }
     } catch (e) {
       if (controller !== mine || (e as Error).name === 'AbortError') return
-      state.value = { ...state.value, error: errorMessage(e), pending: false, revision }
+      state.value = { ...state.value, error: errorMessage(e), revision }
     } finally {
-      if (controller === mine) controller = null
+      if (controller === mine) {
+        controller = null
+        state.value = { ...state.value, pending: false }
+        if (again) { again = false; schedule() }
+      }
     }
   }
 
   function schedule(): void {
     if (timer) clearTimeout(timer)
+    timer = null
     const a = analysis.value
-    // Only once the bending answer for the committed revision is in; an older solve is dropped.
-    if (a.pending || a.revision !== sketch.revision) {
-      if (controller) { controller.abort(); controller = null; state.value = { ...state.value, pending: false } }
-      return
-    }
-    const revision = sketch.revision
-    timer = setTimeout(() => { timer = null; void run(revision) }, SETTLE_MS)
+    // Only once the bending answer for the committed revision is in.
+    if (a.pending || a.revision !== sketch.revision) return
+    timer = setTimeout(() => { timer = null; void run() }, SETTLE_MS)
   }
 
   const stopAnswer = watch(() => [analysis.value.revision, analysis.value.pending, analysis.value.result] as const, schedule)
@@ -88,6 +95,8 @@ export function useLiveTorsion() {
   const stopAsk = watch(() => [state.value.mesh, state.value.study, state.value.showField, state.value.showField ? state.value.T : 0] as const, schedule)
   const stopId = watch(() => sketch.meta?.id, () => {
     controller?.abort()
+    controller = null
+    again = false
     state.value = { ...state.value, result: null, pending: false, error: null, revision: -1, T: 0, study: false, showField: false, mesh: s.mesh }
   })
   onScopeDispose(() => {
