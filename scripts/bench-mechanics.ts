@@ -1,5 +1,5 @@
 // npm run bench: mechanics timings for 1 000, 100 000 and 1 000 000 vertices, then 200 000 vertices
-// end to end through POST /api/analysis on the built server (loopback).
+// end to end through POST /api/analysis on the built server (loopback), then torsion.
 import { mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
@@ -105,4 +105,28 @@ try {
 } finally {
   child.kill('SIGTERM')
   rmSync(dir, { recursive: true, force: true })
+}
+
+// Torsion (finite elements on the section), after the server runs so its meshes do not weigh on
+// the figures above: a thin tube and a wavy solid of 2 000 vertices, and a
+// rolled I with root fillets, at each mesh density: vertex, node and element counts, times.
+// Loaded here, not at the top: the figures above then run with the same modules as before torsion.
+const { torsionAnalysis } = await import('../shared/mechanics/torsion/analysis')
+const { ishape } = await import('../shared/shapes/ishape')
+const tubeOf = (n: number, r: number, t: number) => [wavyRing(n / 2, r).map(([x, y]) => [x, y] as Point), wavyRing(n / 2, r - t).map(([x, y]) => [x, y] as Point).reverse()]
+const ipe = ishape({ h: 200, b: 100, tw: 5.6, tf: 8.5, r: 12 })
+const torsionCases: [string, { outline: Point[]; holes?: Point[][] }][] = [
+  ['thin-tube', { outline: tubeOf(2000, 500, 10)[0]!, holes: [tubeOf(2000, 500, 10)[1]!] }],
+  ['wavy-solid', { outline: wavyRing(2000, 50) }],
+  ['rolled-I', { outline: ipe.outline as Point[], holes: ipe.holes as Point[][] }],
+]
+// BENCH_TORSION=0 skips these.
+for (const [name, part] of process.env.BENCH_TORSION === '0' ? [] : torsionCases) {
+  const prepared = prepareSection([{ ...part, material: { E: 200_000 } }])
+  const vertices = part.outline.length + (part.holes ?? []).reduce((n, h) => n + h.length, 0)
+  for (const mesh of ['coarse', 'normal', 'fine'] as const) {
+    let out = torsionAnalysis(prepared, { mesh })
+    const ms = time(() => { out = torsionAnalysis(prepared, { mesh }) }, 2, 3000)
+    console.log(`torsion section=${name} vertices=${vertices} mesh=${mesh} nodes=${out.mesh.nodes} elements=${out.mesh.elements} total_ms=${fmt(ms)} J=${out.J.toPrecision(5)}`)
+  }
 }

@@ -2,6 +2,7 @@ import { z } from 'zod'
 import type { Ring } from '../geometry/types'
 import type { Point } from '../geometry/types'
 import type { AnalysisOutput } from '../mechanics/analyze'
+import { PoissonRatio, TorsionRequestFields } from './torsion-contract'
 
 const finite = (what: string) => z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be a finite number`)
 /**
@@ -27,6 +28,7 @@ export const AnalysisMaterial = z.object({
   fc: finite('fc').refine(v => v > 0, 'fc must be positive (MPa)').optional(),
   stressBlock: finite('stressBlock').refine(v => v > 0 && v <= 1, 'stressBlock lies in (0, 1]').optional(),
   noTension: z.boolean().optional(),
+  nu: PoissonRatio,
 })
 
 /** Body of POST /api/analysis (mm, N, MPa; P > 0 is compression). */
@@ -65,6 +67,7 @@ export const AnalysisRequest = z.object({
    * plane at each vertex). For a section of thousands of vertices they are most of the answer.
    */
   omit: z.array(z.enum(['kern', 'vertexStresses'], { error: 'omit lists "kern" and/or "vertexStresses"' })).max(2).default([]),
+  ...TorsionRequestFields,
 })
 export type AnalysisRequestBody = z.input<typeof AnalysisRequest>
 

@@ -7,10 +7,11 @@ import { materialKey, prepareSection } from './prepare'
 import { sectionProperties } from './properties'
 import { slenderness, type EffectiveLengths, type SlendernessResult } from './slenderness'
 import { sectionStress } from './stress'
+import { torsionAnalysis, type TorsionInput, type TorsionResult } from './torsion/analysis'
 import type { AppliedMoments, ContactResult, PartInput, PointLoad, PreparedCut, PreparedSection, SectionProperties, StressResult } from './types'
 
 /** Everything one analysis needs (mm, N, N·mm, MPa; P > 0 is compression). */
-export interface AnalysisInput {
+export interface AnalysisInput extends TorsionInput {
   parts: readonly PartInput[]
   /** Section-wide cuts (mm): openings through every part they overlap. */
   cuts?: readonly Ring[]
@@ -56,6 +57,8 @@ export interface AnalysisOutput {
   checkTable?: CheckTable
   vertexCount: number
   warnings: string[]
+  /** Saint-Venant torsion and shear, when the input asks for it (`torsion: true`). */
+  torsion?: TorsionResult
 }
 
 /**
@@ -128,5 +131,6 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     ...(table ? { checkTable: table } : {}),
     vertexCount,
     warnings,
+    ...(input.torsion ? { torsion: torsionAnalysis(prepared, { mesh: input.torsionMesh, study: input.torsionStudy, loads: input.torsionLoads }) } : {}),
   }
 }

@@ -1,0 +1,47 @@
+import { expect, test, type Page } from '@playwright/test'
+import { open, shot, signIn } from './support/helpers'
+
+// A thin channel: web mid-line on x = 0, flange mid-lines at y = ±h/2, tips at x = b, all t thick.
+// Shear centre at e = 3b²/(h + 6b) behind the web (thin-walled closed form, equal thicknesses).
+const h = 200; const b = 100; const t = 4
+const channel = [[-t / 2, -h / 2 - t / 2], [b, -h / 2 - t / 2], [b, -h / 2 + t / 2], [t / 2, -h / 2 + t / 2], [t / 2, h / 2 - t / 2], [b, h / 2 - t / 2], [b, h / 2 + t / 2], [-t / 2, h / 2 + t / 2]]
+
+async function newSketch(page: Page): Promise<string> {
+  const document = {
+    schema: 'kernwise.sketch/1',
+    parts: [{ id: 'part-1', name: 'Channel', holes: [], shape: null, outline: channel, material: { name: 'Steel', E: 200_000, fy: 355, density: 7850 } }],
+    cases: [{ id: 'case-1', name: 'Dead', Mx: 0, My: 0 }],
+    combinations: [],
+    loads: [],
+    settings: { shear: { Vx: 0, Vy: 10_000 } },
+  }
+  const res = await page.request.post('/api/sketches', { data: { title: 'Torsion e2e channel', document } })
+  expect(res.status()).toBe(201)
+  return (await res.json()).id as string
+}
+
+test('the torsion panel shows J, Cw, the shear centre of a channel where the closed form puts it, the mesh study and the τ field', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  const id = await newSketch(page)
+  await open(page, `/sketches/${id}`)
+  const panel = page.getByTestId('torsion-panel')
+  await expect(panel).toHaveAttribute('data-state', 'ready', { timeout: 20_000 })
+  // The live properties came first and still show Ip as the polar moment, not J.
+  await expect(page.getByTestId('properties-panel')).toContainText('Ip polar (not J)')
+  const e = (3 * b * b) / (h + 6 * b)
+  const x = Number(await page.getByTestId('torsion-scx').getAttribute('data-value'))
+  expect(Math.abs(x + e) / e).toBeLessThan(0.03)
+  // Σ b·t³/3 over the mid-lines (thin-walled open section): within 10 % (corners add a little).
+  const J = Number(await page.getByTestId('torsion-J').getAttribute('data-value'))
+  const thin = ((2 * b + h) * t ** 3) / 3
+  expect(Math.abs(J - thin) / thin).toBeLessThan(0.1)
+  await expect(page.getByTestId('torsion-Cw')).toContainText('⁶')
+
+  await page.getByTestId('torsion-study').check()
+  await expect(page.getByTestId('torsion-study-difference')).toContainText('%', { timeout: 20_000 })
+  await page.getByTestId('torsion-field').check()
+  await expect(page.getByTestId('torsion-taumax')).toContainText('τ max', { timeout: 20_000 })
+  await expect(panel).toHaveAttribute('data-state', 'ready', { timeout: 20_000 })
+  await expect(page.getByTestId('torsion-status')).not.toContainText('solving')
+  await shot(page, 'torsion-channel')
+})
