@@ -33,6 +33,14 @@ export class Client {
     return { status: res.status, body: json, headers: res.headers, text }
   }
 
+  /** The cookie (or token) headers this client sends, for a raw fetch of a binary answer. */
+  headersFor(): Record<string, string> {
+    const h: Record<string, string> = {}
+    if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
+    if (this.token) h.authorization = `Bearer ${this.token}`
+    return h
+  }
+
   get(path: string) { return this.request('GET', path) }
   post(path: string, body?: unknown) { return this.request('POST', path, body ?? {}) }
   patch(path: string, body?: unknown) { return this.request('PATCH', path, body ?? {}) }
