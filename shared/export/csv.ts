@@ -28,7 +28,7 @@ export function propertiesCsv(p: SectionProperties, system: UnitSystem): string 
 export function vertexStressCsv(a: Pick<AnalysisOutput, 'regions' | 'stress'>, system: UnitSystem): string {
   const L = unitLabel('length', system)
   const S = unitLabel('stress', system)
-  const lines = [row(['Material', 'Polygon', 'Ring', 'Vertex', `x (${L})`, `y (${L})`, `Stress (${S}, tension +)`])]
+  const lines = [row(['Material', 'Polygon', 'Ring', 'Vertex', `x (${L})`, `y (${L})`, `Stress (${S}; tension +)`])]
   for (const vs of a.stress?.vertices ?? []) {
     const region = a.regions[vs.region]
     const pts = region?.polygons[vs.polygon]?.[vs.ring] ?? []
