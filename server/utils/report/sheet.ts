@@ -149,7 +149,8 @@ function stressPages(doc: Doc, input: ReportInput, width: number): void {
       const part = input.doc.parts.find(p => p.material.name === r.name && p.material.E === r.E)
       return { name: r.name, n: r.n, rings: r.polygons.flat(), fy: r.fy, allowable: part?.material.allowableC ?? part?.material.allowableT ?? null }
     })
-    const rows = checkUtilisation(regions, [st.plane])
+    // A no-tension section carries no tension: its linear plane is held at 0 above (as the Check panel does).
+    const rows = checkUtilisation(regions, [st.plane], a.contact ? 0 : Infinity)
     table(doc, [{ header: 'Material', width: 120 }, { header: `Worst (${u('stress', sys)})`, width: 90, align: 'right' }, { header: `Limit (${u('stress', sys)})`, width: 90, align: 'right' }, { header: 'Utilisation', width: 70, align: 'right' }, { header: 'Result', width: width - 370 }],
       rows.map(r => [r.name, r.worst ? stressCT(r.worst.value, sys) : '—', r.limit !== null ? v(r.limit, 'stress', sys) : '—', r.utilisation !== null ? `${(r.utilisation * 100).toFixed(0)} %` : '—', checkMessage(r)]), 'Checks')
   } else {
