@@ -123,6 +123,22 @@ describe('importDxf', () => {
     expect(() => importDxf('0\nSECTION\n2\nENTITIES\nLINE\n')).toThrow(/Line 5: "LINE" should be a DXF group code/)
   })
 
+  it('reads a full ELLIPSE within 0.1 % of π·a·b (closed form), turned by its major axis', () => {
+    // a = 50 along (30, 40)/50, b = 0.4·a = 20.
+    const e: [number, string | number][] = [[0, 'ELLIPSE'], [8, '0'], [10, 0], [20, 0], [11, 30], [21, 40], [40, 0.4], [41, 0], [42, 2 * Math.PI]]
+    const r = importDxf(dxf([e]), { chordTolerance: 0.01 })
+    expectClose(partArea(r.parts[0]!), Math.PI * 50 * 20, 1e-3)
+    const far = Math.max(...r.parts[0]!.outline.map(p => Math.hypot(p[0], p[1])))
+    expect(far).toBeCloseTo(50, 6) // the major vertex (30, 40) is on the ring
+  })
+
+  it('reads an old-style POLYLINE of VERTEX entities with a bulge: a half disc of r = 10 (area π·r²/2)', () => {
+    const poly: [number, string | number][] = [[0, 'POLYLINE'], [8, 'P'], [66, 1], [70, 1], [0, 'VERTEX'], [8, 'P'], [10, 10], [20, 0], [42, 1], [0, 'VERTEX'], [8, 'P'], [10, -10], [20, 0], [0, 'SEQEND']]
+    const r = importDxf(dxf([poly]), { chordTolerance: 0.001 })
+    expect(r.parts).toHaveLength(1)
+    expectClose(partArea(r.parts[0]!), (Math.PI * 100) / 2, 5e-4)
+  })
+
   it('refuses an INSERT of a block the file does not define', () => {
     const insert: [number, string | number][] = [[0, 'INSERT'], [8, '0'], [2, 'Missing'], [10, 0], [20, 0]]
     expect(() => importDxf(dxf([insert]))).toThrow(/block "Missing"/)
