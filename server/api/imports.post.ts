@@ -62,7 +62,8 @@ export default defineEventHandler(async (event): Promise<ImportResult> => {
     }
     throw error
   }
-  const hash = file ? await storeImportFile(bytes) : opts.hash!
+  // The original is kept only with a sketch; a bare preview needs just its hash.
+  const hash = !file ? opts.hash! : opts.sketchId ? await storeImportFile(bytes) : contentHash(bytes)
   if (opts.sketchId) {
     await rememberImport(opts.sketchId, { hash, name, format: result.format, size: bytes.length, units: result.units, at: new Date().toISOString() })
   }
