@@ -91,7 +91,7 @@ export function drawSection(doc: Doc, a: AnalysisOutput, loads: { P: number; x: 
   // Scale and key under the box.
   const keyY = box.y + box.h + 4
   doc.font('regular').fontSize(7).fillColor('#333')
-    .text(`Scale 1:${n} on ${paper === 'LETTER' ? 'US Letter' : 'A4'} · centroid (circle and cross) · principal axes u (long dashes) and v (short dashes) · core (orange) · neutral line (red) · loads (blue: compression)`, box.x, keyY, { width: box.w })
+      .text(`Scale ${n >= 1 ? `1:${n}` : `${Math.round(1 / n)}:1`} on ${paper === 'LETTER' ? 'US Letter' : 'A4'} · centroid (circle and cross) · principal axes u (long dashes) and v (short dashes) · core (orange) · neutral line (red) · loads (blue: compression)`, box.x, keyY, { width: box.w })
 }
 
 /** The segment of the line A + B·x + C·y = 0 inside the box [x0, x1] × [y0, y1] (mm), or null when it misses. */
