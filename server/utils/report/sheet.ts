@@ -88,6 +88,18 @@ function body(doc: Doc, input: ReportInput): void {
     if (p.equivalent) rows.push(['E_ref', q(p.referenceE, 'stress', sys)])
     table(doc, [{ header: 'Property', width: 170 }, { header: 'Value', width: width - 170, align: 'right' }], rows.map(r => [r[0], r[1]]), 'Section properties')
     if (p.moduliNote) para(doc, p.moduliNote, 7.5)
+    const ct = a.checkTable
+    if (ct && ct.rows.length) {
+      heading(doc, 'Check table: parts, holes and cuts with their parallel-axis terms')
+      const L = u('length', sys); const A2 = u('area', sys); const I4 = u('inertia', sys)
+      table(doc, [
+        { header: 'Row', width: 110 }, { header: 'Sign', width: 28, align: 'right' }, { header: 'n', width: 30, align: 'right' }, { header: `A (${A2})`, width: 62, align: 'right' },
+        { header: `x (${L})`, width: 62, align: 'right' }, { header: `y (${L})`, width: 62, align: 'right' }, { header: `Ixx0 (${I4})`, width: 90, align: 'right' }, { header: `A·dy² (${I4})`, width: width - 444, align: 'right' },
+      ], [
+        ...ct.rows.map(r => [r.name, r.sign < 0 ? '−' : '+', r.n.toPrecision(3), v(r.A, 'area', sys), v(cleanZero(r.x, ext), 'length', sys), v(cleanZero(r.y, ext), 'length', sys), v(r.Ixx0, 'inertia', sys), v(cleanZero(r.Ady2, p.Ixx), 'inertia', sys)]),
+        ['Sums', '', '', v(ct.sums.A, 'area', sys), v(cleanZero(ct.sums.x, ext), 'length', sys), v(cleanZero(ct.sums.y, ext), 'length', sys), '', `Ixx ${v(ct.sums.Ixx, 'inertia', sys)}`],
+      ], 'Check table')
+    }
   }
 
   heading(doc, 'Materials')

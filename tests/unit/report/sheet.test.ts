@@ -25,7 +25,7 @@ const doc = SketchDocumentSchema.parse({
 })
 const base: ReportInput = {
   paper: 'A4', workspace: 'Test works', project: 'P', title: 'Strip', engineer: 'E. Ngineer', checker: null, approval: null,
-  date: new Date('2026-12-02T10:00:00Z'), doc, analysis: analyseSection(AnalysisRequest.parse(analysisRequestFor(doc))), analysisError: null, fonts,
+  date: new Date('2026-12-02T10:00:00Z'), doc, analysis: analyseSection({ ...AnalysisRequest.parse(analysisRequestFor(doc)), checkTable: true }), analysisError: null, fonts,
 }
 const dir = mkdtempSync(join(tmpdir(), 'kw-sheet-'))
 async function text(input: ReportInput): Promise<string> {
@@ -40,6 +40,12 @@ describe('renderCalculationSheet', () => {
     expect(t).toContain('Approved by C. Hecker on 2026-11-30')
     expect(t).not.toContain('NOT CHECKED')
     expect(t).toMatch(/REVISION[\s\S]*4/)
+  })
+  it('tabulates the check table: the strip row and the sums A = 100·10 and Ixx = 100·10³/12 (closed form b·h³/12)', async () => {
+    const t = await text(base)
+    expect(t).toContain('Check table')
+    expect(t).toMatch(/Sums\s+1000\s/)
+    expect(t).toContain('Ixx 8333')
   })
   it('a section that cannot be analysed still gets a sheet that says why', async () => {
     const t = await text({ ...base, analysis: null, analysisError: 'Part 1 crosses itself at vertex 3' })

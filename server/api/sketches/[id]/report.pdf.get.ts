@@ -24,7 +24,7 @@ export default defineEventHandler(async (event) => {
   const request = analysisRequestFor(doc)
   if (request) {
     try {
-      analysis = analyseSection(AnalysisRequest.parse(request))
+      analysis = analyseSection({ ...AnalysisRequest.parse(request), checkTable: true })
     } catch (error) {
       if (!(error instanceof SectionError)) throw error
       analysisError = error.message
