@@ -165,6 +165,19 @@ export const useSketchStore = defineStore('sketch', () => {
     return id
   }
 
+  /** Adds several parts as one change (one undo step), e.g. an import; returns their ids. */
+  function addParts(inputs: NewPart[], label = 'Import'): string[] {
+    const before = doc.value.parts
+    const added: SketchPart[] = inputs.map((input, i) => ({
+      id: newId('part'), name: input.name ?? `Part ${before.length + i + 1}`, kind: input.kind ?? 'solid',
+      outline: orientRing(input.outline, true),
+      holes: (input.holes ?? []).map(h => ({ id: newId('hole'), kind: h.kind ?? 'void', ring: orientRing(h.ring, false) })),
+      material: input.material ?? steel(), shape: input.shape ?? null,
+    }))
+    commitParts(label, [...before, ...added])
+    return added.map(p => p.id)
+  }
+
   /** Renames a part. */
   function renamePart(id: string, name: string): void {
     commitParts('Rename part', ops.updateOne(doc.value.parts, id, p => ({ ...p, name: name.slice(0, 80) })))
@@ -371,7 +384,7 @@ export const useSketchStore = defineStore('sketch', () => {
   // Every action that changes the document commits a held change first, so it reads (and its
   // undo restores) the parts as the user last saw them drawn.
   const actions = allAfterStaged({
-    addPart, renamePart, removeParts, duplicateParts, moveParts, rotateParts, mirrorParts,
+    addPart, addParts, renamePart, removeParts, duplicateParts, moveParts, rotateParts, mirrorParts,
     moveVertex, insertVertex, deleteVertex, makeHollow, makeHole, setPartKind, setHoleKind, removeHole,
     unionParts, subtractParts, setMaterial, updateSettings, setShow,
     addLoad, updateLoad, moveLoad, removeLoad, addCase, renameCase, removeCase, setCaseMoments,

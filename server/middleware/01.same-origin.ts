@@ -2,7 +2,8 @@ const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
 
 /**
  * Cross-site request forgery guard on every state-changing API route (sign-in included): a body
- * must be `application/json` (a form or `text/plain` post from another site cannot be), and a
+ * must be `application/json` (a form or `text/plain` post from another site cannot be; an import's
+ * file upload is `multipart/form-data`), and a
  * request carrying the session cookie must come from this site's own pages: a same-origin
  * `Origin`, or `Sec-Fetch-Site: same-origin` when a browser sends no Origin. A request with
  * `Authorization: Bearer` carries no ambient credential and skips the origin check.
@@ -12,7 +13,9 @@ export default defineEventHandler((event) => {
   const hasBody = Number(getHeader(event, 'content-length') || 0) > 0 || getHeader(event, 'transfer-encoding') !== undefined
   if (hasBody && event.method !== 'DELETE') {
     const type = String(getHeader(event, 'content-type') ?? '').split(';')[0]!.trim().toLowerCase()
-    if (type !== 'application/json') {
+    // A file upload is multipart (POST /api/imports only); the origin check below still applies.
+    const upload = type === 'multipart/form-data' && event.path.startsWith('/api/imports')
+    if (type !== 'application/json' && !upload) {
       throw createError({ statusCode: 415, statusMessage: 'Unsupported Media Type', message: `Send the body as JSON with "Content-Type: application/json" (got "${type || 'none'}").` })
     }
   }

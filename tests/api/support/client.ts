@@ -15,7 +15,8 @@ export class Client {
   async request(method: string, path: string, body?: unknown, headers: Record<string, string> = {}) {
     const h: Record<string, string> = { accept: 'application/json' }
     if (method !== 'GET' && method !== 'HEAD') h.origin = this.base()
-    if (body !== undefined && typeof body !== 'string') h['content-type'] = 'application/json'
+    const raw = body instanceof FormData || body instanceof Uint8Array
+    if (body !== undefined && typeof body !== 'string' && !raw) h['content-type'] = 'application/json'
     Object.assign(h, headers)
     if (h.origin === '') delete h.origin
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
@@ -23,7 +24,7 @@ export class Client {
     const res = await fetch(this.base() + path, {
       method,
       headers: h,
-      body: body === undefined ? undefined : typeof body === 'string' ? body : JSON.stringify(body),
+      body: body === undefined ? undefined : typeof body === 'string' || raw ? (body as BodyInit) : JSON.stringify(body),
     })
     for (const c of res.headers.getSetCookie()) {
       const [pair] = c.split(';')
@@ -53,8 +54,18 @@ export class Client {
     return this
   }
 
+  /** The cookie (or token) headers this client sends, for a raw fetch of a binary answer. */
+  headersFor(): Record<string, string> {
+    const h: Record<string, string> = {}
+    if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ')
+    if (this.token) h.authorization = `Bearer ${this.token}`
+    return h
+  }
+
   get(path: string) { return this.request('GET', path) }
   post(path: string, body?: unknown) { return this.request('POST', path, body ?? {}) }
   patch(path: string, body?: unknown) { return this.request('PATCH', path, body ?? {}) }
   delete(path: string) { return this.request('DELETE', path) }
+  /** A multipart upload (FormData), sent with the server's own Origin as a browser sends it. */
+  upload(path: string, form: FormData) { return this.request('POST', path, form, { origin: this.base() }) }
 }

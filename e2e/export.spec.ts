@@ -1,0 +1,80 @@
+import { readFileSync } from 'node:fs'
+import DxfParser from 'dxf-parser'
+import { expect, test, type Page } from '@playwright/test'
+import { open, shot, signIn } from './support/helpers'
+
+async function download(page: Page, testid: string): Promise<Buffer> {
+  const wait = page.waitForEvent('download')
+  await page.getByTestId('open-export').click()
+  await page.getByTestId(testid).click()
+  return readFileSync((await (await wait).path())!)
+}
+
+test('exports of the brick pier: JSON re-imports, DXF reads back, PNG has its size and colours, CSVs, PDF preview', async ({ page, baseURL }) => {
+  await signIn(page, 'engineer@millrace.test')
+  await open(page, '/')
+  await page.getByTestId('sketch-list').getByRole('link', { name: 'Brick pier P2' }).click()
+  await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'ready')
+  const area = Number(await page.getByTestId('prop-area').getAttribute('data-value'))
+  await page.getByTestId('open-export').click()
+  await expect(page.getByTestId('export-menu')).toBeVisible()
+  await shot(page, 'export-menu')
+  await page.getByTestId('open-export').click()
+
+  const json = JSON.parse((await download(page, 'export-json')).toString('utf8'))
+  expect(json.schema).toBe('kernwise.sketch/2')
+  const partCount = json.parts.length as number
+  expect(partCount).toBeGreaterThan(0)
+
+  const dxf = new DxfParser().parseSync((await download(page, 'export-dxf')).toString('utf8'))!
+  const rings = json.parts.reduce((n: number, p: { holes: unknown[] }) => n + 1 + p.holes.length, 0)
+  expect(dxf.entities.filter(e => e.type === 'LWPOLYLINE')).toHaveLength(rings)
+
+  const png = await download(page, 'export-png')
+  expect(png.subarray(1, 4).toString('latin1')).toBe('PNG')
+  expect([png.readUInt32BE(16), png.readUInt32BE(20)]).toEqual([1200, 800]) // IHDR width, height (PNG spec)
+  // Decode in the page: the background is white; the legend runs from tension (top) to compression (bottom).
+  const px = await page.evaluate(async (b64) => {
+    const img = new Image()
+    img.src = `data:image/png;base64,${b64}`
+    await img.decode()
+    const c = document.createElement('canvas')
+    c.width = img.width; c.height = img.height
+    const g = c.getContext('2d')!
+    g.drawImage(img, 0, 0)
+    const at = (x: number, y: number) => Array.from(g.getImageData(x, y, 1, 1).data.slice(0, 3))
+    return { corner: at(5, 5), top: at(1022, 62), bottom: at(1022, 297) }
+  }, png.toString('base64'))
+  expect(px.corner).toEqual([255, 255, 255])
+  const near = (rgb: number[], hex: string) => rgb.every((v, i) => Math.abs(v - parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16)) < 20)
+  expect(near(px.top, '#c2413a'), `top ${px.top}`).toBe(true) // EXPORT_COLOURS.tension
+  expect(near(px.bottom, '#2f5fa7'), `bottom ${px.bottom}`).toBe(true) // EXPORT_COLOURS.compression
+
+  const props = (await download(page, 'export-properties')).toString('utf8').split('\n')
+  expect(props[0]).toBe('Property,Value,Unit')
+  const [name, value, unit] = props[1]!.split(',')
+  expect(name).toBe('A')
+  expect(unit).toBe('mm²')
+  expect(Math.abs(Number(value) - area) / area).toBeLessThan(1e-9) // the same analysis as the panel
+
+  const vertices = (await download(page, 'export-vertices')).toString('utf8').trim().split('\n')
+  expect(vertices[0]).toMatch(/^Material,Polygon,Ring,Vertex,x \(mm\),y \(mm\),Stress/)
+  expect(vertices.length).toBeGreaterThan(4)
+
+  await page.getByTestId('open-export').click()
+  const href = await page.getByTestId('export-pdf-a4').getAttribute('href')
+  const pdf = await page.request.get(href!)
+  expect(pdf.headers()['content-type']).toBe('application/pdf')
+  expect((await pdf.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-')
+
+  // The JSON re-imports into a new sketch with the same parts and area.
+  const made = await page.request.post('/api/sketches', { data: { title: 'Pier again' }, headers: { origin: baseURL! } })
+  await open(page, `/sketches/${(await made.json()).id}`)
+  await page.getByTestId('open-import').click()
+  await page.getByTestId('import-file').setInputFiles({ name: 'pier.kernwise.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(json)) })
+  await expect(page.getByTestId('import-summary')).toContainText(`${partCount} part`)
+  await page.getByTestId('import-insert').click()
+  await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'ready')
+  const again = Number(await page.getByTestId('prop-area').getAttribute('data-value'))
+  expect(Math.abs(again - area) / area).toBeLessThan(1e-9)
+})

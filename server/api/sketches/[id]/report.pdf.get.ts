@@ -1,0 +1,65 @@
+import { IdParams } from '../../../../shared/auth/schemas'
+import { AnalysisRequest } from '../../../../shared/analysis/contract'
+import { analysisRequestFor } from '../../../../shared/editor/analysis-request'
+import { ReportQuery } from '../../../../shared/export/report-query'
+import { analyseSection, type AnalysisOutput } from '../../../../shared/mechanics/analyze'
+import { SectionError } from '../../../../shared/mechanics/types'
+import { renderCalculationSheet } from '../../../utils/report/sheet'
+
+/**
+ * The calculation sheet of one of my sketches as a PDF (A4 or US Letter): the working state,
+ * marked "not checked" on every page. `?revision=N` answers 404 until revisions exist.
+ */
+export default defineEventHandler(async (event) => {
+  const user = await requireUser(event)
+  const { id } = await paramsAs(event, IdParams)
+  const query = await queryAs(event, ReportQuery)
+  const sketch = await findOwnSketch(event, user, id)
+  if (query.revision) {
+    throw createError({ statusCode: 404, message: `Revision ${query.revision} does not exist: sketches have no revisions yet. Leave out ?revision for the working state.` })
+  }
+  const doc = readDocument(sketch.document)
+  let analysis: AnalysisOutput | null = null
+  let analysisError: string | null = null
+  const request = analysisRequestFor(doc)
+  if (request) {
+    try {
+      analysis = analyseSection({ ...AnalysisRequest.parse(request), checkTable: true })
+    } catch (error) {
+      if (!(error instanceof SectionError)) throw error
+      analysisError = error.message
+    }
+  }
+  const fonts = useStorage('assets:fonts')
+  const [regular, bold] = await Promise.all([
+    fonts.getItemRaw('ibm-plex-sans-latin-400-normal.woff'),
+    fonts.getItemRaw('ibm-plex-sans-latin-600-normal.woff'),
+  ])
+  const pdf = await renderCalculationSheet({
+    paper: query.paper,
+    workspace: 'Kernwise workspace',
+    project: sketch.project,
+    title: sketch.title,
+    engineer: user.name,
+    checker: null,
+    approval: null,
+    date: new Date(),
+    doc,
+    analysis,
+    analysisError,
+    fonts: { regular: toBytes(regular), bold: toBytes(bold) },
+  })
+  const file = `${sketch.title.replace(/[^\w.-]+/g, '-').slice(0, 60) || 'sketch'}-calculation.pdf`
+  setResponseHeaders(event, {
+    'content-type': 'application/pdf',
+    'content-disposition': `${query.download === '1' ? 'attachment' : 'inline'}; filename="${file}"`,
+    'cache-control': 'private, no-store',
+  })
+  return pdf
+})
+
+function toBytes(raw: unknown): Uint8Array {
+  if (raw instanceof Uint8Array) return raw
+  if (raw instanceof ArrayBuffer) return new Uint8Array(raw)
+  throw createError({ statusCode: 500, message: 'The report fonts are missing from the server build.' })
+}

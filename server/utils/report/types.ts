@@ -1,0 +1,30 @@
+import type { AnalysisOutput } from '../../../shared/mechanics/analyze'
+import type { SketchDocument } from '../../../shared/sketch/document'
+
+/** Paper sizes of the calculation sheet. */
+export type Paper = 'A4' | 'LETTER'
+
+/** The approval of a revision, once revisions exist; null marks the working state ("not checked"). */
+export interface ReportApproval {
+  revision: number
+  approvedBy: string
+  approvedAt: Date
+}
+
+/** Everything one calculation sheet needs: identity for the title block, the document, its analysis and the fonts. */
+export interface ReportInput {
+  paper: Paper
+  workspace: string
+  project: string
+  title: string
+  engineer: string
+  /** The checker's name, or null ("—") while nobody has checked it. */
+  checker: string | null
+  approval: ReportApproval | null
+  date: Date
+  doc: SketchDocument
+  /** The analysis of `doc` under its shown loading (with `checkTable`), or null with `analysisError`. */
+  analysis: AnalysisOutput | null
+  analysisError: string | null
+  fonts: { regular: Uint8Array; bold: Uint8Array }
+}

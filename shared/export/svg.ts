@@ -1,0 +1,78 @@
+import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '../editor/units'
+import type { AnalysisOutput } from '../mechanics/analyze'
+
+/** Colours of the exported stress field: compression, zero, tension. */
+export const EXPORT_COLOURS = { compression: '#2f5fa7', zero: '#f4f4f1', tension: '#c2413a', outline: '#1f2a2a' } as const
+
+type Answer = Pick<AnalysisOutput, 'properties' | 'regions' | 'stress' | 'kern'>
+
+/**
+ * The section as a standalone SVG of `width` × `height` px: each material region filled with its
+ * stress field (the field is a plane, so a linear gradient along its slope is exact; colours run
+ * from compression through zero to tension, symmetric about zero), holes cut, the centroid, the
+ * neutral line, the core, a legend of the extremes and a scale bar, in the units of `system`.
+ */
+export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 1200, height = 800): string {
+  const b = a.properties.bounds
+  const pad = 60
+  const legendW = 200
+  const s = Math.min((width - legendW - 2 * pad) / Math.max(b.maxX - b.minX, 1e-9), (height - 2 * pad) / Math.max(b.maxY - b.minY, 1e-9))
+  const ox = pad + ((width - legendW - 2 * pad) - s * (b.maxX - b.minX)) / 2 - s * b.minX
+  const oy = height - pad - ((height - 2 * pad) - s * (b.maxY - b.minY)) / 2 + s * b.minY
+  const X = (x: number) => +(ox + s * x).toFixed(2)
+  const Y = (y: number) => +(oy - s * y).toFixed(2)
+  const path = (rings: readonly (readonly (readonly [number, number])[])[]) => rings.map(r => `M${r.map(p => `${X(p[0])},${Y(p[1])}`).join('L')}Z`).join('')
+  const st = a.stress
+  const peak = st ? Math.max(...a.regions.map(r => r.n)) * Math.max(Math.abs(st.max.value), Math.abs(st.min.value)) : 0
+  const defs: string[] = []
+  const shapes: string[] = []
+  a.regions.forEach((r, i) => {
+    let fill = '#cfe0dc'
+    if (st && peak > 0) {
+      // Along the slope (b, c) of n·plane: the stress at t is known, so stops at -peak, 0, +peak are placed exactly.
+      const { a: pa, b: pb, c: pc } = st.plane
+      const g = Math.hypot(pb, pc)
+      if (g > 0) {
+        const ux = pb / g; const uy = pc / g
+        // Points where n·sigma = ±peak along the line through the origin in the slope direction.
+        const t = (target: number) => (target / r.n - pa) / g
+        const p0 = [ux * t(-peak), uy * t(-peak)]; const p1 = [ux * t(peak), uy * t(peak)]
+        defs.push(`<linearGradient id="g${i}" gradientUnits="userSpaceOnUse" x1="${X(p0[0]!)}" y1="${Y(p0[1]!)}" x2="${X(p1[0]!)}" y2="${Y(p1[1]!)}"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${EXPORT_COLOURS.tension}"/></linearGradient>`)
+        fill = `url(#g${i})`
+      } else {
+        fill = pa * r.n < 0 ? EXPORT_COLOURS.compression : EXPORT_COLOURS.tension
+      }
+    }
+    for (const poly of r.polygons) shapes.push(`<path d="${path(poly)}" fill="${fill}" fill-rule="evenodd" stroke="${EXPORT_COLOURS.outline}" stroke-width="1.2"/>`)
+  })
+  if (a.kern.length >= 3) shapes.push(`<path d="${path([a.kern])}" fill="none" stroke="#c26a00" stroke-width="1.2"/>`)
+  const c = a.properties.centroid
+  shapes.push(`<circle cx="${X(c.x)}" cy="${Y(c.y)}" r="4" fill="none" stroke="#111"/><path d="M${X(c.x) - 8},${Y(c.y)}h16M${X(c.x)},${Y(c.y) - 8}v16" stroke="#111"/>`)
+  // Scale bar: a round length near a quarter of the drawing's width.
+  const target = (width - legendW - 2 * pad) / 4 / s
+  const step = 10 ** Math.floor(Math.log10(target))
+  const barMm = [5, 2, 1].map(m => m * step).find(v => v <= target) ?? step
+  const L = unitLabel('length', system)
+  const S = unitLabel('stress', system)
+  const legendX = width - legendW + 10
+  const fmt = (v: number) => `${formatNumber(Math.abs(toDisplay(v, 'stress', system)))} ${S}${v < 0 ? ' C' : v > 0 ? ' T' : ''}`
+  const legend = st
+    ? `<defs><linearGradient id="lg" x1="0" y1="1" x2="0" y2="0"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${EXPORT_COLOURS.tension}"/></linearGradient></defs>
+<rect x="${legendX}" y="${pad}" width="24" height="240" fill="url(#lg)" stroke="#555"/>
+<text x="${legendX + 32}" y="${pad + 10}">${fmt(peak)}</text><text x="${legendX + 32}" y="${pad + 124}">0</text><text x="${legendX + 32}" y="${pad + 240}">${fmt(-peak)}</text>
+<text x="${legendX}" y="${pad + 270}">max ${fmt(st.max.value)}</text><text x="${legendX}" y="${pad + 290}">min ${fmt(st.min.value)}</text>`
+    : `<text x="${legendX}" y="${pad + 10}">No load: unstressed</text>`
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="IBM Plex Sans, sans-serif" font-size="14">
+<rect width="${width}" height="${height}" fill="#ffffff"/>
+<defs>${defs.join('')}</defs>
+${shapes.join('\n')}
+<g data-role="legend">${legend}</g>
+<g data-role="scale-bar"><path d="M${pad},${height - 24}h${(barMm * s).toFixed(2)}" stroke="#111" stroke-width="3"/><text x="${pad}" y="${height - 32}">${formatNumber(toDisplay(barMm, 'length', system))} ${L}</text></g>
+<text x="${pad}" y="30" font-size="16" font-weight="600">${escapeXml(title)}</text>
+</svg>
+`
+}
+
+function escapeXml(s: string): string {
+  return s.replace(/[<>&"']/g, c => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!)
+}

@@ -1,0 +1,87 @@
+import DxfParser from 'dxf-parser'
+import { describe, expect, it } from 'vitest'
+import { AnalysisRequest } from '../../../shared/analysis/contract'
+import { analysisRequestFor } from '../../../shared/editor/analysis-request'
+import { propertiesCsv, vertexStressCsv } from '../../../shared/export/csv'
+import { DXF_LAYERS, exportDxf } from '../../../shared/export/dxf'
+import { exportJson, importJson, isKernwiseJson } from '../../../shared/export/json'
+import { exportSvg } from '../../../shared/export/svg'
+import { importDxf } from '../../../shared/import/dxf'
+import { signedArea } from '../../../shared/import/geometry'
+import { analyseSection } from '../../../shared/mechanics/analyze'
+import { SketchDocumentSchema } from '../../../shared/sketch/document'
+
+// A 200 × 100 plate with a 40 × 20 void, a cut square, 100 kN off centre.
+const doc = SketchDocumentSchema.parse({
+  schema: 'kernwise.sketch/2',
+  parts: [
+    { id: 'p1', name: 'Plate, "A"', outline: [[0, 0], [200, 0], [200, 100], [0, 100]], holes: [{ id: 'h1', ring: [[20, 20], [20, 40], [60, 40], [60, 20]] }], material: { name: 'Steel', E: 200000, fy: 355 }, shape: null },
+    { id: 'c1', name: 'Bolt', kind: 'cut', outline: [[150, 45], [160, 45], [160, 55], [150, 55]], holes: [], material: { name: 'Steel', E: 200000 }, shape: null },
+  ],
+  cases: [{ id: 'd', name: 'Dead', Mx: 0, My: 0 }],
+  loads: [{ id: 'l', name: 'Column', caseId: 'd', P: 100000, x: 120, y: 60 }],
+  settings: { units: 'SI' },
+})
+const analysis = analyseSection(AnalysisRequest.parse(analysisRequestFor(doc)))
+
+describe('exportJson / importJson', () => {
+  it('round-trips the document exactly', () => {
+    const text = exportJson(doc)
+    expect(isKernwiseJson(text)).toBe(true)
+    expect(importJson(text)).toEqual(doc)
+  })
+  it('refuses text that is not a Kernwise document, saying why', () => {
+    expect(() => importJson('{"schema": "kernwise.sketch/2", "parts": 3}')).toThrow(/not a valid Kernwise sketch/)
+    expect(() => importJson('{nope')).toThrow(/not valid JSON/)
+  })
+})
+
+describe('exportDxf', () => {
+  it('is read back by dxf-parser (an npm library as the outside check) with every ring on its layer', () => {
+    const parsed = new DxfParser().parseSync(exportDxf(doc))!
+    expect(parsed.header.$INSUNITS).toBe(4)
+    const polys = parsed.entities.filter(e => e.type === 'LWPOLYLINE') as unknown as { layer: string; shape: boolean; vertices: { x: number; y: number }[] }[]
+    expect(polys.map(p => p.layer)).toEqual([DXF_LAYERS.parts, DXF_LAYERS.holes, DXF_LAYERS.cuts])
+    expect(polys.every(p => p.shape)).toBe(true)
+    expect(polys[0]!.vertices.map(v => [v.x, v.y])).toEqual(doc.parts[0]!.outline)
+  })
+  it('imports back into the same section: the plate with its void and the cut nested as holes (area 200·100 − 40·20 − 10·10)', () => {
+    const back = importDxf(exportDxf(doc))
+    expect(back.units).toBe('mm')
+    expect(back.parts).toHaveLength(1)
+    const plate = back.parts[0]!
+    expect(plate.holes).toHaveLength(2)
+    expect(Math.abs(signedArea(plate.outline)) - plate.holes.reduce((s, h) => s + Math.abs(signedArea(h)), 0)).toBe(200 * 100 - 40 * 20 - 10 * 10)
+  })
+})
+
+describe('CSV exports', () => {
+  it('the property table lists A in the display unit: 200·100 − 40·20 − 10·10 = 19 100 mm², and in in² for US customary', () => {
+    const si = propertiesCsv(analysis.properties, 'SI').split('\n')
+    expect(si[0]).toBe('Property,Value,Unit')
+    expect(si[1]).toMatch(/^A,19100,/) // 20000 − 800 − 100 (closed form)
+    const us = propertiesCsv(analysis.properties, 'US').split('\n')
+    expect(Number(us[1]!.split(',')[1])).toBeCloseTo(19100 / 645.16, 6) // 1 in² = 645.16 mm² (NIST SP 811)
+  })
+  it('the vertex stresses equal the plane at each vertex, one row per vertex', () => {
+    const lines = vertexStressCsv(analysis, 'SI').trim().split('\n')
+    const count = analysis.stress!.vertices.reduce((n, v) => n + v.values.length, 0)
+    expect(lines).toHaveLength(count + 1)
+    const [, , , , x, y, s] = lines[1]!.split(',').map(Number)
+    const { a, b, c } = analysis.stress!.plane
+    // σ = a + b·x + c·y (README "Method", stress is a plane).
+    expect(s).toBeCloseTo(a + b * x! + c * y!, 6)
+  })
+})
+
+describe('exportSvg', () => {
+  it('draws the regions with a stress gradient, the legend with the extremes and a scale bar', () => {
+    const svg = exportSvg(analysis, 'Plate <1>', 'SI')
+    expect(svg).toMatch(/^<svg xmlns="http:\/\/www.w3.org\/2000\/svg" width="1200" height="800"/)
+    expect(svg).toContain('linearGradient id="g0"')
+    expect(svg).toContain('data-role="legend"')
+    expect(svg).toContain('data-role="scale-bar"')
+    expect(svg).toContain('Plate &lt;1&gt;')
+    expect(svg).toMatch(/min [\d.]+ MPa C/)
+  })
+})
