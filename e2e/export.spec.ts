@@ -33,7 +33,8 @@ test('exports of the brick pier: JSON re-imports, DXF reads back, PNG has its si
   const png = await download(page, 'export-png')
   expect(png.subarray(1, 4).toString('latin1')).toBe('PNG')
   expect([png.readUInt32BE(16), png.readUInt32BE(20)]).toEqual([1200, 800]) // IHDR width, height (PNG spec)
-  // Decode in the page: the background is white; the legend runs from tension (top) to compression (bottom).
+  // Decode in the page: the background is white; the pier carries no tension, so its legend runs from
+  // zero pressure (top) to the peak compression (bottom), and no tension colour is drawn.
   const px = await page.evaluate(async (b64) => {
     const img = new Image()
     img.src = `data:image/png;base64,${b64}`
@@ -47,7 +48,7 @@ test('exports of the brick pier: JSON re-imports, DXF reads back, PNG has its si
   }, png.toString('base64'))
   expect(px.corner).toEqual([255, 255, 255])
   const near = (rgb: number[], hex: string) => rgb.every((v, i) => Math.abs(v - parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16)) < 20)
-  expect(near(px.top, '#c2413a'), `top ${px.top}`).toBe(true) // EXPORT_COLOURS.tension
+  expect(near(px.top, '#f4f4f1'), `top ${px.top}`).toBe(true) // EXPORT_COLOURS.zero
   expect(near(px.bottom, '#2f5fa7'), `bottom ${px.bottom}`).toBe(true) // EXPORT_COLOURS.compression
 
   const props = (await download(page, 'export-properties')).toString('utf8').split('\n')

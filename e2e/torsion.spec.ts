@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, shot, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 // A thin channel: web mid-line on x = 0, flange mid-lines at y = ±h/2, tips at x = b, all t thick.
 // Shear centre at e = 3b²/(h + 6b) behind the web (thin-walled closed form, equal thicknesses).
@@ -15,7 +15,7 @@ async function newSketch(page: Page): Promise<string> {
     loads: [],
     settings: { shear: { Vx: 0, Vy: 10_000 } },
   }
-  const res = await page.request.post('/api/sketches', { data: { title: 'Torsion e2e channel', document } })
+  const res = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Torsion e2e channel', document } })
   expect(res.status()).toBe(201)
   return (await res.json()).id as string
 }

@@ -140,15 +140,17 @@ function busy(event: H3Event, message: string): never {
  * one account are in flight and at most `queue` wait for a worker; beyond either the answer is
  * 429 with Retry-After. A geometry error is the same 422 as in-line; an analysis over the time
  * limit is stopped (its worker replaced) and answers 422. A section of at most `inlineVertices`
- * vertices (about 2 ms of work) runs in-line, and so does everything without the worker bundle
- * (nuxt dev).
+ * vertices (about 2 ms of work) runs in-line unless it asks for torsion (a finite-element solve),
+ * and so does everything without the worker bundle (nuxt dev).
  */
 export async function analyseInPool(event: H3Event, input: Input): Promise<Output> {
   config ??= settings()
   const file = findWorkerFile()
   let vertices = 0
   for (const part of input.parts) vertices += part.outline.length + (part.holes ?? []).reduce((n, h) => n + h.length, 0)
-  if (!file || vertices <= config.inlineVertices) return withSectionErrors(() => analyseSection(input))
+  // Torsion meshes and solves (up to a second or two) whatever the vertex count: always in a worker.
+  const heavy = input.torsion === true || vertices > config.inlineVertices
+  if (!file || !heavy) return withSectionErrors(() => analyseSection(input))
   while (slots.length < config.workers) slots.push(spawn(file))
   const account = String((event.context.kwUser as { id?: string } | undefined)?.id ?? clientAddress(event))
   const mine = perAccount.get(account) ?? 0

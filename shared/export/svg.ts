@@ -4,13 +4,15 @@ import type { AnalysisOutput } from '../mechanics/analyze'
 /** Colours of the exported stress field: compression, zero, tension. */
 export const EXPORT_COLOURS = { compression: '#2f5fa7', zero: '#f4f4f1', tension: '#c2413a', outline: '#1f2a2a' } as const
 
-type Answer = Pick<AnalysisOutput, 'properties' | 'regions' | 'stress' | 'kern'>
+type Answer = Pick<AnalysisOutput, 'properties' | 'regions' | 'stress' | 'kern'> & { contact?: AnalysisOutput['contact'] }
 
 /**
  * The section as a standalone SVG of `width` × `height` px: each material region filled with its
  * stress field (the field is a plane, so a linear gradient along its slope is exact; colours run
  * from compression through zero to tension, symmetric about zero), holes cut, the centroid, the
  * neutral line, the core, a legend of the extremes and a scale bar, in the units of `system`.
+ * A no-tension answer (with `contact`) shows the contact pressure instead: compression only, held at
+ * zero where the section lifts off, or a plain overturning note.
  */
 export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 1200, height = 800): string {
   const b = a.properties.bounds
@@ -22,8 +24,15 @@ export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 
   const X = (x: number) => +(ox + s * x).toFixed(2)
   const Y = (y: number) => +(oy - s * y).toFixed(2)
   const path = (rings: readonly (readonly (readonly [number, number])[])[]) => rings.map(r => `M${r.map(p => `${X(p[0])},${Y(p[1])}`).join('L')}Z`).join('')
-  const st = a.stress
-  const peak = st ? Math.max(...a.regions.map(r => r.n)) * Math.max(Math.abs(st.max.value), Math.abs(st.min.value)) : 0
+  // No tension: the field is the contact pressure q (compression-positive), as sigma = -q held at 0.
+  const contact = a.contact
+  const lifted = contact !== undefined
+  const cq = contact?.plane ?? null
+  const st = lifted
+    ? (cq && contact!.peak ? { plane: { a: -cq.a, b: -cq.b, c: -cq.c }, max: { value: 0 }, min: { value: -contact!.peak.value } } : null)
+    : a.stress
+  const peak = st ? (lifted ? Math.abs(st.min.value) : Math.max(...a.regions.map(r => r.n)) * Math.max(Math.abs(st.max.value), Math.abs(st.min.value))) : 0
+  const tensionColour = lifted ? EXPORT_COLOURS.zero : EXPORT_COLOURS.tension
   const defs: string[] = []
   const shapes: string[] = []
   a.regions.forEach((r, i) => {
@@ -37,10 +46,10 @@ export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 
         // Points where n·sigma = ±peak along the line through the origin in the slope direction.
         const t = (target: number) => (target / r.n - pa) / g
         const p0 = [ux * t(-peak), uy * t(-peak)]; const p1 = [ux * t(peak), uy * t(peak)]
-        defs.push(`<linearGradient id="g${i}" gradientUnits="userSpaceOnUse" x1="${X(p0[0]!)}" y1="${Y(p0[1]!)}" x2="${X(p1[0]!)}" y2="${Y(p1[1]!)}"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${EXPORT_COLOURS.tension}"/></linearGradient>`)
+        defs.push(`<linearGradient id="g${i}" gradientUnits="userSpaceOnUse" x1="${X(p0[0]!)}" y1="${Y(p0[1]!)}" x2="${X(p1[0]!)}" y2="${Y(p1[1]!)}"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${tensionColour}"/></linearGradient>`)
         fill = `url(#g${i})`
       } else {
-        fill = pa * r.n < 0 ? EXPORT_COLOURS.compression : EXPORT_COLOURS.tension
+        fill = pa * r.n < 0 ? EXPORT_COLOURS.compression : tensionColour
       }
     }
     for (const poly of r.polygons) shapes.push(`<path d="${path(poly)}" fill="${fill}" fill-rule="evenodd" stroke="${EXPORT_COLOURS.outline}" stroke-width="1.2"/>`)
@@ -56,12 +65,20 @@ export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 
   const S = unitLabel('stress', system)
   const legendX = width - legendW + 10
   const fmt = (v: number) => `${formatNumber(Math.abs(toDisplay(v, 'stress', system)))} ${S}${v < 0 ? ' C' : v > 0 ? ' T' : ''}`
-  const legend = st
-    ? `<defs><linearGradient id="lg" x1="0" y1="1" x2="0" y2="0"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${EXPORT_COLOURS.tension}"/></linearGradient></defs>
+  const legend = lifted && !st
+    ? `<text x="${legendX}" y="${pad + 10}">Overturning: no equilibrium</text><text x="${legendX}" y="${pad + 30}">without tension</text>`
+    : lifted && st
+      ? `<defs><linearGradient id="lg" x1="0" y1="1" x2="0" y2="0"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="1" stop-color="${EXPORT_COLOURS.zero}"/></linearGradient></defs>
+<text x="${legendX}" y="${pad - 12}">Contact pressure (no tension)</text>
+<rect x="${legendX}" y="${pad}" width="24" height="240" fill="url(#lg)" stroke="#555"/>
+<text x="${legendX + 32}" y="${pad + 10}">0</text><text x="${legendX + 32}" y="${pad + 240}">${fmt(-peak)}</text>
+<text x="${legendX}" y="${pad + 270}">peak ${fmt(-peak)}</text><text x="${legendX}" y="${pad + 290}">contact ${formatNumber(100 * (contact!.area ?? 0) / a.properties.area, 3)} % of the base</text>`
+      : st
+        ? `<defs><linearGradient id="lg" x1="0" y1="1" x2="0" y2="0"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="0.5" stop-color="${EXPORT_COLOURS.zero}"/><stop offset="1" stop-color="${EXPORT_COLOURS.tension}"/></linearGradient></defs>
 <rect x="${legendX}" y="${pad}" width="24" height="240" fill="url(#lg)" stroke="#555"/>
 <text x="${legendX + 32}" y="${pad + 10}">${fmt(peak)}</text><text x="${legendX + 32}" y="${pad + 124}">0</text><text x="${legendX + 32}" y="${pad + 240}">${fmt(-peak)}</text>
 <text x="${legendX}" y="${pad + 270}">max ${fmt(st.max.value)}</text><text x="${legendX}" y="${pad + 290}">min ${fmt(st.min.value)}</text>`
-    : `<text x="${legendX}" y="${pad + 10}">No load: unstressed</text>`
+        : `<text x="${legendX}" y="${pad + 10}">No load: unstressed</text>`
   return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="IBM Plex Sans, sans-serif" font-size="14">
 <rect width="${width}" height="${height}" fill="#ffffff"/>
 <defs>${defs.join('')}</defs>

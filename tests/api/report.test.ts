@@ -62,6 +62,24 @@ describe('GET /api/sketches/:id/report.pdf', () => {
     })
   })
 
+  it('a no-tension footing shows contact pressures, never tension, with the peak 2P/(3B(L/2 - e)) (standard footing result)', async () => {
+    // Pad 1000 x 1000 on soil, 1000 kN at e = 300 mm: contact 600 mm, q_max = 2·10⁶/(3·1000·200) = 3.33 MPa.
+    const pad = {
+      ...plateDoc,
+      parts: [{ id: 'pad', name: 'Pad', outline: [[-500, -500], [500, -500], [500, 500], [-500, 500]], holes: [], material: { name: 'Soil', E: 50, density: 1900, noTension: true, fc: 0.2 }, shape: null }],
+      loads: [{ id: 'l1', name: 'Column', caseId: 'dead', P: 1e6, x: 0, y: 300 }],
+      settings: { noTension: true },
+    }
+    const padId = (await owner.post('/api/sketches', { title: 'Pad P9', document: pad })).body.id
+    const { text } = await pdfPages(`/api/sketches/${padId}/report.pdf`)
+    const all = text.join('\n')
+    expect(all).toContain('Contact pressure at every vertex')
+    expect(all).toMatch(/Peak pressure\s.*3\.333 C/)
+    expect(all).toContain('OVER what it can bear')
+    const vertexRows = all.slice(all.indexOf('Contact pressure at every vertex'), all.indexOf('No-tension contact'))
+    expect(vertexRows).not.toMatch(/\d T\b/) // no tension anywhere
+  })
+
   it('prints US Letter in US customary units when the sketch uses them', async () => {
     const us = (await owner.post('/api/sketches', { title: 'US plate', document: { ...plateDoc, settings: { units: 'US' } } })).body.id
     const { text, info } = await pdfPages(`/api/sketches/${us}/report.pdf?paper=Letter`)

@@ -129,40 +129,54 @@ function stressPages(doc: Doc, input: ReportInput, width: number): void {
   const sys = input.doc.settings.units
   const a = input.analysis!
   const st = a.stress
-  heading(doc, 'Stresses at the extreme points')
+  // A no-tension section is shown by its contact pressure (sigma = -q, never tension), not by the
+  // linear plane, which would show tension it cannot carry and a lower peak (README "Method").
+  const c = a.contact
+  const cp = c?.plane ?? null
+  const plane = c ? (cp ? { a: -cp.a, b: -cp.b, c: -cp.c } : null) : st?.plane ?? null
+  const at = (n: number, x: number, y: number) => {
+    const val = n * (plane!.a + plane!.b * x + plane!.c * y)
+    return c ? Math.min(0, val) : val
+  }
+  heading(doc, c ? 'Contact pressures' : 'Stresses at the extreme points')
   if (!st) {
     para(doc, 'No load and no moment: the section is unstressed.')
+  } else if (c && !plane) {
+    para(doc, `Overturning: ${c.message}`)
   } else {
-    para(doc, `N = ${q(st.N, 'force', sys)} (tension-positive), Mx = ${q(st.Mx, 'moment', sys)}, My = ${q(st.My, 'moment', sys)} about the centroid. The resultant is ${st.inKern ? 'inside' : 'outside'} the core.${st.neutralAxis ? ` Neutral line: ${st.neutralAxis.a.toPrecision(4)} + ${st.neutralAxis.b.toPrecision(4)}·x + ${st.neutralAxis.c.toPrecision(4)}·y = 0 (x, y in mm).` : ' No neutral line crosses the plane.'}`)
-    table(doc, [{ header: 'Point', width: 140 }, { header: `x (${u('length', sys)})`, width: 90, align: 'right' }, { header: `y (${u('length', sys)})`, width: 90, align: 'right' }, { header: `Stress (${u('stress', sys)})`, width: 110, align: 'right' }], [
-      ['Largest (most tensile)', v(st.max.x, 'length', sys), v(st.max.y, 'length', sys), stressCT(st.max.value, sys)],
-      ['Smallest (most compressive)', v(st.min.x, 'length', sys), v(st.min.y, 'length', sys), stressCT(st.min.value, sys)],
-    ], 'Extremes')
-    heading(doc, 'Stresses at every vertex')
+    para(doc, `N = ${q(st.N, 'force', sys)} (tension-positive), Mx = ${q(st.Mx, 'moment', sys)}, My = ${q(st.My, 'moment', sys)} about the centroid. The resultant is ${st.inKern ? 'inside' : 'outside'} the core.${c ? (c.liftOff ? ' No tension: part of the base lifts off; the pressures below are those of the contact solution.' : ' No tension: full contact.') : st.neutralAxis ? ` Neutral line: ${st.neutralAxis.a.toPrecision(4)} + ${st.neutralAxis.b.toPrecision(4)}·x + ${st.neutralAxis.c.toPrecision(4)}·y = 0 (x, y in mm).` : ' No neutral line crosses the plane.'}`)
+    const extremes = c
+      ? [['Peak pressure', v(c.peak!.x, 'length', sys), v(c.peak!.y, 'length', sys), stressCT(-c.peak!.value, sys)]]
+      : [
+          ['Largest (most tensile)', v(st.max.x, 'length', sys), v(st.max.y, 'length', sys), stressCT(st.max.value, sys)],
+          ['Smallest (most compressive)', v(st.min.x, 'length', sys), v(st.min.y, 'length', sys), stressCT(st.min.value, sys)],
+        ]
+    table(doc, [{ header: 'Point', width: 140 }, { header: `x (${u('length', sys)})`, width: 90, align: 'right' }, { header: `y (${u('length', sys)})`, width: 90, align: 'right' }, { header: `Stress (${u('stress', sys)})`, width: 110, align: 'right' }], extremes, 'Extremes')
+    heading(doc, c ? 'Contact pressure at every vertex' : 'Stresses at every vertex')
     const rows: string[][] = []
     for (const vs of st.vertices) {
       const region = a.regions[vs.region]
       const ringPts = region?.polygons[vs.polygon]?.[vs.ring] ?? []
       vs.values.forEach((val, i) => {
         const pt = ringPts[i]
-        rows.push([String(rows.length + 1), region?.name ?? '', vs.ring === 0 ? 'outline' : `hole ${vs.ring}`, pt ? v(pt[0], 'length', sys) : '—', pt ? v(pt[1], 'length', sys) : '—', stressCT(val, sys)])
+        const shown = c && pt ? at(region!.n, pt[0], pt[1]) : val
+        rows.push([String(rows.length + 1), region?.name ?? '', vs.ring === 0 ? 'outline' : `hole ${vs.ring}`, pt ? v(pt[0], 'length', sys) : '—', pt ? v(pt[1], 'length', sys) : '—', stressCT(shown, sys)])
       })
     }
-    table(doc, [{ header: '#', width: 34, align: 'right' }, { header: 'Material', width: 120 }, { header: 'Ring', width: 70 }, { header: `x (${u('length', sys)})`, width: 90, align: 'right' }, { header: `y (${u('length', sys)})`, width: 90, align: 'right' }, { header: `Stress (${u('stress', sys)})`, width: width - 404, align: 'right' }], rows, 'Stresses at every vertex')
+    table(doc, [{ header: '#', width: 34, align: 'right' }, { header: 'Material', width: 120 }, { header: 'Ring', width: 70 }, { header: `x (${u('length', sys)})`, width: 90, align: 'right' }, { header: `y (${u('length', sys)})`, width: 90, align: 'right' }, { header: `Stress (${u('stress', sys)})`, width: width - 404, align: 'right' }], rows, c ? 'Contact pressure at every vertex' : 'Stresses at every vertex')
   }
-  if (a.contact) {
+  if (c) {
     heading(doc, 'No-tension contact')
-    const c = a.contact
     para(doc, `${c.message} Status: ${c.status}; contact area ${q(c.area, 'area', sys)}; peak pressure ${c.peak ? `${v(c.peak.value, 'stress', sys)} ${u('stress', sys)} C at (${v(c.peak.x, 'length', sys)}, ${v(c.peak.y, 'length', sys)})` : '—'}.`)
+    for (const b of c.bearing ?? []) para(doc, `${b.name}: peak ${v(b.peak, 'stress', sys)} ${u('stress', sys)} against a compression or bearing strength of ${v(b.strength, 'stress', sys)} ${u('stress', sys)}: ${(b.ratio * 100).toFixed(0)} %${b.ratio > 1 ? ', OVER what it can bear' : ''}.`)
   }
   heading(doc, 'Checks and utilisation')
-  if (st) {
+  if (st && plane) {
     const regions = a.regions.map((r) => {
       const part = input.doc.parts.find(p => p.material.name === r.name && p.material.E === r.E)
-      return { name: r.name, n: r.n, rings: r.polygons.flat(), fy: r.fy, allowable: part?.material.allowableC ?? part?.material.allowableT ?? null }
+      return { name: r.name, n: r.n, rings: r.polygons.flat(), fy: r.fy, fc: r.fc, allowableT: part?.material.allowableT ?? null, allowableC: part?.material.allowableC ?? null }
     })
-    // A no-tension section carries no tension: its linear plane is held at 0 above (as the Check panel does).
-    const rows = checkUtilisation(regions, [st.plane], a.contact ? 0 : Infinity)
+    const rows = checkUtilisation(regions, [plane], c ? 0 : Infinity)
     table(doc, [{ header: 'Material', width: 120 }, { header: `Worst (${u('stress', sys)})`, width: 90, align: 'right' }, { header: `Limit (${u('stress', sys)})`, width: 90, align: 'right' }, { header: 'Utilisation', width: 70, align: 'right' }, { header: 'Result', width: width - 370 }],
       rows.map(r => [r.name, r.worst ? stressCT(r.worst.value, sys) : '—', r.limit !== null ? v(r.limit, 'stress', sys) : '—', r.utilisation !== null ? `${(r.utilisation * 100).toFixed(0)} %` : '—', checkMessage(r)]), 'Checks')
   } else {

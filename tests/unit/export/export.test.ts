@@ -5,7 +5,8 @@ import { analysisRequestFor } from '../../../shared/editor/analysis-request'
 import { propertiesCsv, vertexStressCsv } from '../../../shared/export/csv'
 import { DXF_LAYERS, exportDxf } from '../../../shared/export/dxf'
 import { exportJson, importJson, isKernwiseJson } from '../../../shared/export/json'
-import { exportSvg } from '../../../shared/export/svg'
+import { EXPORT_COLOURS, exportSvg } from '../../../shared/export/svg'
+import { formatNumber } from '../../../shared/editor/units'
 import { importDxf } from '../../../shared/import/dxf'
 import { signedArea } from '../../../shared/import/geometry'
 import { analyseSection } from '../../../shared/mechanics/analyze'
@@ -83,5 +84,20 @@ describe('exportSvg', () => {
     expect(svg).toContain('data-role="scale-bar"')
     expect(svg).toContain('Plate &lt;1&gt;')
     expect(svg).toMatch(/min [\d.]+ MPa C/)
+  })
+})
+
+describe('exportSvg of a no-tension section', () => {
+  it('shows the contact pressure, compression only (no tension colour), with the peak 2P/(3B(L/2 - e)) of the standard footing result', () => {
+    const a = analyseSection({ parts: [{ outline: [[-500, -500], [500, -500], [500, 500], [-500, 500]], material: { E: 50 } }], loads: [{ P: 1e6, x: 0, y: 300 }], noTension: true })
+    const svg = exportSvg(a, 'Pad', 'SI')
+    expect(svg).toContain('Contact pressure (no tension)')
+    expect(svg).not.toContain(EXPORT_COLOURS.tension)
+    expect(svg).toContain(`peak ${formatNumber(2e6 / (3 * 1000 * 200))} MPa C`)
+  })
+
+  it('says overturning when the resultant leaves the base', () => {
+    const a = analyseSection({ parts: [{ outline: [[-500, -500], [500, -500], [500, 500], [-500, 500]], material: { E: 50 } }], loads: [{ P: 1e6, x: 0, y: 700 }], noTension: true })
+    expect(exportSvg(a, 'Pad', 'SI')).toContain('Overturning')
   })
 })
