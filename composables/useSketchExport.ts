@@ -32,7 +32,8 @@ export function useSketchExport() {
     sketch.flushStaged()
     busy.value = true
     try {
-      const system = sketch.settings.units
+      // The unit system with the area and inertia units chosen in the settings bar.
+      const system = sketch.settings
       if (kind === 'json') return save(`${baseName()}.kernwise.json`, new Blob([exportJson(sketch.doc)], { type: 'application/json' }))
       if (kind === 'dxf') return save(`${baseName()}.dxf`, new Blob([exportDxf(sketch.doc)], { type: 'application/dxf' }))
       const a = await analysis()

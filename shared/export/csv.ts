@@ -1,4 +1,4 @@
-import { toDisplay, unitLabel, type Quantity, type UnitSystem } from '../editor/units'
+import { toDisplay, unitLabel, type Quantity, type Units } from '../editor/units'
 import type { AnalysisOutput } from '../mechanics/analyze'
 import type { SectionProperties } from '../mechanics/types'
 
@@ -9,10 +9,10 @@ export function csvField(v: string | number | null): string {
 }
 
 const row = (cells: (string | number | null)[]) => cells.map(csvField).join(',')
-const num = (v: number | null, q: Quantity, system: UnitSystem) => (v === null || !Number.isFinite(v) ? null : Number(toDisplay(v, q, system).toPrecision(10)))
+const num = (v: number | null, q: Quantity, system: Units) => (v === null || !Number.isFinite(v) ? null : Number(toDisplay(v, q, system).toPrecision(10)))
 
 /** The section properties as CSV rows "property, value, unit" in the display units of `system` (mm, MPa… inside). */
-export function propertiesCsv(p: SectionProperties, system: UnitSystem): string {
+export function propertiesCsv(p: SectionProperties, system: Units): string {
   const rows: [string, number | null, Quantity][] = [
     ['A', p.area, 'area'], ['xc', p.centroid.x, 'length'], ['yc', p.centroid.y, 'length'],
     ['Ixx', p.Ixx, 'inertia'], ['Iyy', p.Iyy, 'inertia'], ['Ixy', p.Ixy, 'inertia'], ['I1', p.I1, 'inertia'], ['I2', p.I2, 'inertia'],
@@ -25,7 +25,7 @@ export function propertiesCsv(p: SectionProperties, system: UnitSystem): string 
 }
 
 /** The stress at every vertex as CSV: material, polygon, ring, vertex, x, y, stress (tension-positive) in the display units of `system`. */
-export function vertexStressCsv(a: Pick<AnalysisOutput, 'regions' | 'stress'>, system: UnitSystem): string {
+export function vertexStressCsv(a: Pick<AnalysisOutput, 'regions' | 'stress'>, system: Units): string {
   const L = unitLabel('length', system)
   const S = unitLabel('stress', system)
   const lines = [row(['Material', 'Polygon', 'Ring', 'Vertex', `x (${L})`, `y (${L})`, `Stress (${S}; tension +)`])]

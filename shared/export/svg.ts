@@ -1,4 +1,4 @@
-import { formatNumber, toDisplay, unitLabel, type UnitSystem } from '../editor/units'
+import { formatNumber, toDisplay, unitLabel, type Units } from '../editor/units'
 import type { AnalysisOutput } from '../mechanics/analyze'
 
 /** Colours of the exported stress field: compression, zero, tension. */
@@ -14,7 +14,7 @@ type Answer = Pick<AnalysisOutput, 'properties' | 'regions' | 'stress' | 'kern'>
  * A no-tension answer (with `contact`) shows the contact pressure instead: compression only, held at
  * zero where the section lifts off, or a plain overturning note.
  */
-export function exportSvg(a: Answer, title: string, system: UnitSystem, width = 1200, height = 800): string {
+export function exportSvg(a: Answer, title: string, system: Units, width = 1200, height = 800): string {
   const b = a.properties.bounds
   const pad = 60
   const legendW = 200

@@ -1,5 +1,5 @@
 import type PDFDocument from 'pdfkit'
-import type { UnitSystem } from '../../../shared/editor/units'
+import type { Units } from '../../../shared/editor/units'
 import type { AnalysisOutput } from '../../../shared/mechanics/analyze'
 import { q } from './text'
 
@@ -25,7 +25,7 @@ export function drawingScale(extent: number, room: number): number {
  * overall dimensions, the centroid, the principal axes, the core, the neutral line and the load
  * points, with the scale stated. y runs up in the section and down on the page.
  */
-export function drawSection(doc: Doc, a: AnalysisOutput, loads: { P: number; x: number; y: number; name: string }[], box: { x: number; y: number; w: number; h: number }, system: UnitSystem, paper: string): void {
+export function drawSection(doc: Doc, a: AnalysisOutput, loads: { P: number; x: number; y: number; name: string }[], box: { x: number; y: number; w: number; h: number }, system: Units, paper: string): void {
   const b = a.properties.bounds
   const pad = 46
   const n = drawingScale(Math.max(b.maxX - b.minX, (b.maxY - b.minY) * (box.w - 2 * pad) / (box.h - 2 * pad)), box.w - 2 * pad)

@@ -47,7 +47,8 @@ export function renderCalculationSheet(input: ReportInput): Promise<Buffer> {
 type Doc = InstanceType<typeof PDFDocument>
 
 function body(doc: Doc, input: ReportInput): void {
-  const sys = input.doc.settings.units
+  // The sketch's unit system with its area and inertia units (the section panel's choice).
+  const sys = input.doc.settings
   const a = input.analysis
   const width = doc.page.width - doc.page.margins.left - doc.page.margins.right
   const sd = input.doc
@@ -56,7 +57,7 @@ function body(doc: Doc, input: ReportInput): void {
     ? `case ${(sd.cases.find(c => c.id === sd.settings.show.id) ?? sd.cases[0])?.name ?? ''}`
     : `combination ${(sd.combinations.find(c => c.id === sd.settings.show.id) ?? sd.combinations[0])?.name ?? ''}`
   doc.font('bold').fontSize(13).fillColor('#111').text(pdfText(`${input.title}: section calculation`), doc.page.margins.left, CONTENT_TOP)
-  para(doc, `Units: ${sys === 'US' ? 'US customary' : 'SI'}. Stresses tension-positive, C compression, T tension. Loading shown: ${showName}. Chord tolerance for arcs: ${q(sd.settings.chordTolerance, 'length', sys)}.`)
+  para(doc, `Units: ${sys.units === 'US' ? 'US customary' : 'SI'}. Stresses tension-positive, C compression, T tension. Loading shown: ${showName}. Chord tolerance for arcs: ${q(sd.settings.chordTolerance, 'length', sys)}.`)
   if (!a) {
     heading(doc, 'Section')
     para(doc, `The section could not be analysed: ${input.analysisError ?? 'it has no solid part'}.`)
@@ -126,7 +127,8 @@ function body(doc: Doc, input: ReportInput): void {
 }
 
 function stressPages(doc: Doc, input: ReportInput, width: number): void {
-  const sys = input.doc.settings.units
+  // The sketch's unit system with its area and inertia units (the section panel's choice).
+  const sys = input.doc.settings
   const a = input.analysis!
   const st = a.stress
   // A no-tension section is shown by its contact pressure (sigma = -q, never tension), not by the
@@ -194,7 +196,7 @@ function methodPage(doc: Doc, input: ReportInput): void {
     doc.moveDown(0.3).font('bold').fontSize(8.5).text(pdfText(s.title))
     para(doc, s.body, 8)
   }
-  para(doc, `Chord tolerance of this sketch: ${q(input.doc.settings.chordTolerance, 'length', input.doc.settings.units)}.`, 8)
+  para(doc, `Chord tolerance of this sketch: ${q(input.doc.settings.chordTolerance, 'length', input.doc.settings)}.`, 8)
   doc.moveDown(0.4).font('bold').fontSize(10.5).text('Cautions')
   para(doc, CAUTION, 8.5)
 }

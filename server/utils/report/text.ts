@@ -1,4 +1,4 @@
-import { formatNumber, toDisplay, unitLabel, type Quantity, type UnitSystem } from '../../../shared/editor/units'
+import { formatNumber, toDisplay, unitLabel, type Quantity, type Units } from '../../../shared/editor/units'
 
 // The PDF embeds the Latin subset of IBM Plex: superscripts beyond ³ and Greek or maths signs are
 // spelled out so no glyph goes missing (a missing glyph prints as a blank box).
@@ -16,24 +16,24 @@ export function pdfText(s: string): string {
 }
 
 /** A model value (mm, N, MPa, N·mm…) in the sheet's unit system, four significant digits and its unit. */
-export function q(value: number | null | undefined, quantity: Quantity, system: UnitSystem, digits = 4): string {
+export function q(value: number | null | undefined, quantity: Quantity, system: Units, digits = 4): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—'
   return pdfText(`${formatNumber(toDisplay(value, quantity, system), digits)} ${unitLabel(quantity, system)}`)
 }
 
 /** A value in display units without its unit (for table cells under a unit heading). */
-export function v(value: number | null | undefined, quantity: Quantity, system: UnitSystem, digits = 4): string {
+export function v(value: number | null | undefined, quantity: Quantity, system: Units, digits = 4): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—'
   return pdfText(formatNumber(toDisplay(value, quantity, system), digits))
 }
 
 /** The unit label of a quantity, printable. */
-export function u(quantity: Quantity, system: UnitSystem): string {
+export function u(quantity: Quantity, system: Units): string {
   return pdfText(unitLabel(quantity, system))
 }
 
 /** A stress (MPa model value, tension-positive) with its C or T. */
-export function stressCT(value: number, system: UnitSystem): string {
+export function stressCT(value: number, system: Units): string {
   if (!Number.isFinite(value)) return '—'
   const tag = Math.abs(value) < 1e-9 ? '' : value < 0 ? ' C' : ' T'
   return `${v(Math.abs(value), 'stress', system)}${tag}`

@@ -101,3 +101,14 @@ describe('exportSvg of a no-tension section', () => {
     expect(exportSvg(a, 'Pad', 'SI')).toContain('Overturning')
   })
 })
+
+describe('exports follow the area and inertia units chosen in the settings bar', () => {
+  it('a 200 x 100 plate in cm² and cm⁴: A = 200 cm², Ixx = 1666.67 cm⁴ (closed form bh³/12, 1 cm⁴ = 10⁴ mm⁴)', () => {
+    const a = analyseSection({ parts: [{ outline: [[0, 0], [200, 0], [200, 100], [0, 100]] }] })
+    const csv = propertiesCsv(a.properties, { units: 'SI', areaUnit: 'cm2', inertiaUnit: 'cm4' }).split('\n')
+    const row = (name: string) => csv.find(l => l.startsWith(`${name},`))!.split(',')
+    expect(row('A')).toEqual(['A', '200', 'cm²'])
+    expect(Number(row('Ixx')[1])).toBeCloseTo((200 * 100 ** 3) / 12 / 1e4, 6)
+    expect(row('Ixx')[2]).toBe('cm⁴')
+  })
+})
