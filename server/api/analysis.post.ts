@@ -1,5 +1,5 @@
-import { AnalysisRequest, type AnalysisResponse } from '../../shared/analysis/contract'
-import { analyseSection } from '../../shared/mechanics/analyze'
+import { analysisAnswer, NOT_FINITE_MESSAGE } from '../../shared/analysis/answer'
+import { AnalysisRequest } from '../../shared/analysis/contract'
 import { MAX_VERTICES } from '../../shared/sketch/document'
 
 /**
@@ -16,19 +16,17 @@ export default defineEventHandler(async (event) => {
   if (vertices > MAX_VERTICES) {
     throw createError({ statusCode: 413, message: `The section has ${vertices} vertices; the limit is ${MAX_VERTICES}. Use a coarser chord tolerance for arcs.` })
   }
-  const result = await analyseInPool(event, body)
-  // The regions are the validated input rings (or Boolean results of them), so the walk skips
-  // them; the vertex stresses are checked with a flat loop.
-  const { regions: _regions, stress, ...rest } = result
-  const finite = allFinite(rest) && (stress === null || (allFinite({ ...stress, vertices: [] }) && stress.vertices.every(v => v.values.every(Number.isFinite))))
-  if (!finite) {
-    // A degenerate case slipped through the engine's own checks: say so instead of sending NaN.
-    throw createError({ statusCode: 422, message: 'The section is too degenerate to analyse (a result was not finite). Check for sliver parts or zero-thickness walls.' })
+  // A heavy section goes to a worker with the body's text and comes back as the answer's text.
+  const result = await analyseInPool(event, body, (await readRawBody(event, 'utf8')) ?? '')
+  if ('json' in result) {
+    setResponseHeader(event, 'Server-Timing', `analysis;dur=${(performance.now() - t0).toFixed(2)}`)
+    setResponseHeader(event, 'Content-Type', 'application/json')
+    return result.json
   }
+  const answer = analysisAnswer(result, body.omit)
+  // A degenerate case slipped through the engine's own checks: say so instead of sending NaN.
+  if (!answer) throw createError({ statusCode: 422, message: NOT_FINITE_MESSAGE })
   // Sign-in, parse, checks and the analysis (not the JSON encoding of the answer), for clients' timing.
   setResponseHeader(event, 'Server-Timing', `analysis;dur=${(performance.now() - t0).toFixed(2)}`)
-  const answer: AnalysisResponse = result
-  if (body.omit.includes('kern')) delete answer.kern
-  if (body.omit.includes('vertexStresses') && answer.stress) delete answer.stress.vertices
   return answer
 })

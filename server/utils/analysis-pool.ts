@@ -10,10 +10,15 @@ import type { AnalysisJob, AnalysisReply } from '../workers/analysis.worker'
 type Input = Parameters<typeof analyseSection>[0]
 type Output = ReturnType<typeof analyseSection>
 
+/** A worker's answer: the finished answer as JSON text (finite-checked, `omit` applied). */
+export interface WorkerAnswer {
+  json: string
+}
+
 interface Pending {
   job: AnalysisJob
   account: string
-  resolve: (value: Output) => void
+  resolve: (value: WorkerAnswer) => void
   reject: (error: unknown) => void
 }
 
@@ -103,10 +108,10 @@ function finish(slot: Slot, reply: AnalysisReply): void {
   if (slot.timer) clearTimeout(slot.timer)
   slot.busy = null
   release(p)
-  if ('result' in reply) p.resolve(reply.result)
+  if ('json' in reply) p.resolve({ json: reply.json })
   else if ('sectionError' in reply) {
     const e = reply.sectionError
-    p.reject(createError({ statusCode: 422, statusMessage: 'Unprocessable Geometry', message: e.message, data: { part: e.part, ring: e.ring, vertex: e.vertex } }))
+    p.reject(createError({ statusCode: 422, statusMessage: 'Unprocessable Geometry', message: e.message, data: { part: e.part, ring: e.ring, vertex: e.vertex, cut: e.cut ?? null } }))
   } else {
     console.error('[kernwise] analysis failed in its worker:', reply.failure)
     p.reject(createError({ statusCode: 500, statusMessage: 'Internal Server Error', message: 'The analysis failed on the server. It has been logged; try again or simplify the section.' }))
@@ -143,7 +148,7 @@ function busy(event: H3Event, message: string): never {
  * vertices (about 2 ms of work) runs in-line unless it asks for torsion (a finite-element solve),
  * and so does everything without the worker bundle (nuxt dev).
  */
-export async function analyseInPool(event: H3Event, input: Input): Promise<Output> {
+export async function analyseInPool(event: H3Event, input: Input, text: string): Promise<Output | WorkerAnswer> {
   config ??= settings()
   const file = findWorkerFile()
   let vertices = 0
@@ -157,8 +162,8 @@ export async function analyseInPool(event: H3Event, input: Input): Promise<Outpu
   if (mine >= config.perAccount) busy(event, `You have ${mine} analyses running already (the limit is ${config.perAccount}); wait for one to finish.`)
   if (queue.length >= config.queue) busy(event, 'The server is busy with other analyses; try again in 2 s.')
   perAccount.set(account, mine + 1)
-  return new Promise<Output>((resolve, reject) => {
-    queue.push({ job: { id: nextId++, input }, account, resolve, reject })
+  return new Promise<WorkerAnswer>((resolve, reject) => {
+    queue.push({ job: { id: nextId++, text }, account, resolve, reject })
     pump()
   })
 }

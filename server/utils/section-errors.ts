@@ -20,20 +20,5 @@ export function withSectionErrors<T>(compute: () => T): T {
   }
 }
 
-/** True when every number in a JSON-able value is finite (nothing NaN or Infinity may go out). */
-export function allFinite(value: unknown): boolean {
-  if (typeof value === 'number') return Number.isFinite(value)
-  if (value === null || typeof value !== 'object') return true
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) {
-      const v = value[i]
-      if (typeof v === 'number' ? !Number.isFinite(v) : !allFinite(v)) return false
-    }
-    return true
-  }
-  for (const key in value) {
-    const v = (value as Record<string, unknown>)[key]
-    if (typeof v === 'number' ? !Number.isFinite(v) : !allFinite(v)) return false
-  }
-  return true
-}
+/** True when every number in a JSON-able value is finite: shared with the analysis worker. */
+export { allFinite } from '../../shared/analysis/answer'

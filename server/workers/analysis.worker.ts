@@ -1,29 +1,37 @@
 // The analysis worker thread (bundled on its own into .output/server/workers/analysis.mjs by the
 // build, see nuxt.config.ts): runs shared/mechanics' analyseSection on one request at a time,
-// off the server's event loop. Bad geometry comes back as the SectionError's fields.
+// off the server's event loop. It takes the request's JSON text and answers JSON text: a large
+// section's rings cross the thread boundary as one string, not as hundreds of thousands of
+// cloned arrays. Bad geometry comes back as the SectionError's fields.
 import { parentPort } from 'node:worker_threads'
+import { analysisAnswer, NOT_FINITE_MESSAGE } from '../../shared/analysis/answer'
+import { AnalysisRequest } from '../../shared/analysis/contract'
 import { analyseSection } from '../../shared/mechanics/analyze'
 import { SectionError } from '../../shared/mechanics/types'
 
-/** A job from the pool: an id to answer with and the validated request body. */
+/** A job from the pool: an id to answer with and the request body as JSON text (already validated by the route). */
 export interface AnalysisJob {
   id: number
-  input: Parameters<typeof analyseSection>[0]
+  text: string
 }
 
-/** What the worker answers: the result, a geometry error, or an unexpected failure. */
+/** What the worker answers: the answer as JSON text, a geometry error, or an unexpected failure. */
 export type AnalysisReply =
-  | { id: number; result: ReturnType<typeof analyseSection> }
-  | { id: number; sectionError: { message: string; part: number | null; ring: number | null; vertex: number | null } }
+  | { id: number; json: string }
+  | { id: number; sectionError: { message: string; part: number | null; ring: number | null; vertex: number | null; cut?: number | null } }
   | { id: number; failure: string }
 
 parentPort?.on('message', (job: AnalysisJob) => {
   let reply: AnalysisReply
   try {
-    reply = { id: job.id, result: analyseSection(job.input) }
+    const input = AnalysisRequest.parse(JSON.parse(job.text))
+    const answer = analysisAnswer(analyseSection(input), input.omit)
+    reply = answer
+      ? { id: job.id, json: JSON.stringify(answer) }
+      : { id: job.id, sectionError: { message: NOT_FINITE_MESSAGE, part: null, ring: null, vertex: null } }
   } catch (error) {
     reply = error instanceof SectionError
-      ? { id: job.id, sectionError: { message: error.message, part: error.part, ring: error.ring, vertex: error.vertex } }
+      ? { id: job.id, sectionError: { message: error.message, part: error.part, ring: error.ring, vertex: error.vertex, cut: error.cut } }
       : { id: job.id, failure: error instanceof Error ? (error.stack ?? error.message) : String(error) }
   }
   parentPort!.postMessage(reply)
