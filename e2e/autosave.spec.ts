@@ -1,18 +1,8 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, SAME_ORIGIN, signIn } from './support/helpers'
-
-/** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
-async function transform(page: Page) {
-  const canvas = page.getByTestId('sketch-canvas')
-  const box = (await canvas.boundingBox())!
-  const zoom = Number(await canvas.getAttribute('data-zoom'))
-  const panX = Number(await canvas.getAttribute('data-pan-x'))
-  const panY = Number(await canvas.getAttribute('data-pan-y'))
-  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
-}
+import { canvasTransform, open, SAME_ORIGIN, signIn } from './support/helpers'
 
 async function outline(page: Page, points: readonly (readonly [number, number])[]): Promise<void> {
-  const at = await transform(page)
+  const at = await canvasTransform(page)
   await page.getByTestId('tool-outline').click()
   for (const [x, y] of points) await page.mouse.click(at(x, y).x, at(x, y).y)
   await page.keyboard.press('Enter')

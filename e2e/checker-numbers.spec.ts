@@ -1,25 +1,8 @@
 import { expect, test } from '@playwright/test'
-import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { canvasTransform, dragMouse, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 // The numbers a checker signs, as the editor shows them on the demo sketches.
 
-/** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
-async function transform(page: import('@playwright/test').Page) {
-  const canvas = page.getByTestId('sketch-canvas')
-  const box = (await canvas.boundingBox())!
-  const zoom = Number(await canvas.getAttribute('data-zoom'))
-  const panX = Number(await canvas.getAttribute('data-pan-x'))
-  const panY = Number(await canvas.getAttribute('data-pan-y'))
-  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
-}
-
-/** Drags the mouse in small steps, as a person would. */
-async function drag(page: import('@playwright/test').Page, from: { x: number; y: number }, to: { x: number; y: number }) {
-  await page.mouse.move(from.x, from.y)
-  await page.mouse.down()
-  for (let k = 1; k <= 8; k++) await page.mouse.move(from.x + ((to.x - from.x) * k) / 8, from.y + ((to.y - from.y) * k) / 8)
-  await page.mouse.up()
-}
 async function openDemo(page: import('@playwright/test').Page, title: string): Promise<void> {
   await open(page, '/')
   await page.getByTestId('sketch-list').getByRole('link', { name: title }).click()
@@ -79,9 +62,9 @@ test('a tee of two plates: the weld line carries Vy·Q/I and is halved per line 
   await expect(page.getByTestId('plastic-note')).toContainText('geometric')
   await shot(page, 'checker-tee-properties')
   // A box drawn across the joint, made a cut: it takes 20 x 20 from the flange and 10 x 10 from the web.
-  const at = await transform(page)
+  const at = await canvasTransform(page)
   await page.getByTestId('tool-box').click()
-  await drag(page, at(-10, 170), at(10, 210))
+  await dragMouse(page, at(-10, 170), at(10, 210))
   await page.getByTestId('make-cut').click()
   await expect(page.getByTestId('part-kind')).toHaveValue('cut')
   await expect.poll(async () => Number(await page.getByTestId('prop-area').getAttribute('data-value'))).toBeCloseTo(5800 - 400 - 100, 6)

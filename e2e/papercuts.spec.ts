@@ -1,21 +1,12 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
-
-async function transform(page: Page) {
-  const canvas = page.getByTestId('sketch-canvas')
-  const box = (await canvas.boundingBox())!
-  const zoom = Number(await canvas.getAttribute('data-zoom'))
-  const panX = Number(await canvas.getAttribute('data-pan-x'))
-  const panY = Number(await canvas.getAttribute('data-pan-y'))
-  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
-}
+import { canvasTransform, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 test('with no load the legend and the tension panel say so; with invalid geometry every stress panel says so', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
   const { id } = await (await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'No load yet' } })).json()
   await open(page, `/sketches/${id}`)
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
-  let at = await transform(page)
+  let at = await canvasTransform(page)
   await page.getByTestId('tool-box').click()
   await page.mouse.move(at(-50, -50).x, at(-50, -50).y)
   await page.mouse.down()
@@ -27,7 +18,7 @@ test('with no load the legend and the tension panel say so; with invalid geometr
   await expect(page.getByTestId('no-load')).toBeVisible()
   await shot(page, 'papercut-no-load')
   // A bow-tie: the geometry is invalid, and no stress panel shows stresses of the drawing before.
-  at = await transform(page)
+  at = await canvasTransform(page)
   await page.getByTestId('tool-outline').click()
   for (const [x, y] of [[-50, -150], [50, -250], [50, -150], [-50, -250]] as const) await page.mouse.click(at(x, y).x, at(x, y).y)
   await page.keyboard.press('Enter')

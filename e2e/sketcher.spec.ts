@@ -1,23 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { shot, signIn, SAME_ORIGIN } from './support/helpers'
-
-/** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
-async function transform(page: Page) {
-  const canvas = page.getByTestId('sketch-canvas')
-  const box = (await canvas.boundingBox())!
-  const zoom = Number(await canvas.getAttribute('data-zoom'))
-  const panX = Number(await canvas.getAttribute('data-pan-x'))
-  const panY = Number(await canvas.getAttribute('data-pan-y'))
-  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
-}
-
-/** Drags the mouse in small steps, as a person would. */
-async function drag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }) {
-  await page.mouse.move(from.x, from.y)
-  await page.mouse.down()
-  for (let k = 1; k <= 8; k++) await page.mouse.move(from.x + ((to.x - from.x) * k) / 8, from.y + ((to.y - from.y) * k) / 8)
-  await page.mouse.up()
-}
+import { canvasTransform, dragMouse, SAME_ORIGIN, shot, signIn } from './support/helpers'
 
 /** Polygon area (shoelace), the test's own computation from the vertex table. */
 function shoelace(pts: [number, number][]): number {
@@ -61,8 +43,8 @@ test('the engineer draws a box, inserts an I section, drags and undoes a vertex 
 
   // 1. A 200 × 100 mm box by mouse drag, corners on the 10 mm grid (snap is on by default).
   await page.getByTestId('tool-box').click()
-  let at = await transform(page)
-  await drag(page, at(-100, -50), at(100, 50))
+  let at = await canvasTransform(page)
+  await dragMouse(page, at(-100, -50), at(100, 50))
   const box = await readVertices(page)
   expect(box).toEqual([[-100, -50], [100, -50], [100, 50], [-100, 50]])
   expect(shoelace(box)).toBe(200 * 100)
@@ -82,10 +64,10 @@ test('the engineer draws a box, inserts an I section, drags and undoes a vertex 
   await shot(page, 'sketcher-ishape')
 
   // 3. Select the box and drag its top-right corner 50 mm to the right: a trapezoid.
-  at = await transform(page)
+  at = await canvasTransform(page)
   await page.mouse.click(at(0, 0).x, at(0, 0).y)
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('100')
-  await drag(page, at(100, 50), at(150, 50))
+  await dragMouse(page, at(100, 50), at(150, 50))
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('150')
   const trapezoid = 200 * 100 + (50 * 100) / 2
   expect(shoelace(await readVertices(page))).toBe(trapezoid)
@@ -107,7 +89,7 @@ test('the engineer draws a box, inserts an I section, drags and undoes a vertex 
   await shot(page, 'sketcher-typed')
 
   // Double-click on an edge inserts a corner there (area unchanged); a picked corner goes with Delete.
-  at = await transform(page)
+  at = await canvasTransform(page)
   await page.mouse.dblclick(at(0, -50).x, at(0, -50).y)
   await expect(page.getByTestId('vertex-4-x')).toHaveCount(1)
   expect((await readVertices(page))[1]).toEqual([0, -50])
@@ -153,7 +135,7 @@ test('an outline by clicks, closed with Enter, then nudged, rotated and undone b
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
 
   await page.getByTestId('tool-outline').click()
-  const at = await transform(page)
+  const at = await canvasTransform(page)
   for (const [x, y] of [[0, 0], [200, 0], [0, 150]] as const) await page.mouse.click(at(x, y).x, at(x, y).y)
   await expect(page.getByTestId('outline-hint')).toBeVisible()
   await shot(page, 'sketcher-outline-drawing')
@@ -200,8 +182,8 @@ test('a save that lost the race offers "Keep mine as a copy" and loses nothing',
   expect(other.status()).toBe(200)
 
   await page.getByTestId('tool-box').click()
-  const at = await transform(page)
-  await drag(page, at(0, 0), at(100, 40))
+  const at = await canvasTransform(page)
+  await dragMouse(page, at(0, 0), at(100, 40))
   await expect(page.getByTestId('save-conflict')).toBeVisible({ timeout: 5000 })
   await shot(page, 'sketcher-conflict')
   await page.getByTestId('keep-mine').click()
@@ -222,11 +204,11 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
 
-  let at = await transform(page)
+  let at = await canvasTransform(page)
   await page.getByTestId('tool-box').click()
-  await drag(page, at(-100, -50), at(0, 50))
+  await dragMouse(page, at(-100, -50), at(0, 50))
   await page.getByTestId('tool-box').click()
-  await drag(page, at(-50, -50), at(50, 50))
+  await dragMouse(page, at(-50, -50), at(50, 50))
   // Shift-click adds the first box; Join makes one 150 × 100 part.
   await page.keyboard.down('Shift')
   await page.mouse.click(at(-90, 0).x, at(-90, 0).y)
@@ -236,7 +218,7 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
 
   // A 20 × 20 box inside becomes a void of the part it lies in.
   await page.getByTestId('tool-box').click()
-  await drag(page, at(-10, -10), at(10, 10))
+  await dragMouse(page, at(-10, -10), at(10, 10))
   await page.getByTestId('make-void').click()
   await expectArea(page, 150 * 100 - 20 * 20)
   await shot(page, 'sketcher-void')
@@ -267,13 +249,13 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
   await shot(page, 'sketcher-hollow-us')
 
   // The wheel zooms about the pointer: the model point under it stays put.
-  at = await transform(page)
+  at = await canvasTransform(page)
   const p = at(-75, 0)
   await page.mouse.move(p.x, p.y)
   const zoom0 = Number(await page.getByTestId('sketch-canvas').getAttribute('data-zoom'))
   await page.mouse.wheel(0, -100)
   await expect.poll(async () => Number(await page.getByTestId('sketch-canvas').getAttribute('data-zoom'))).toBeGreaterThan(zoom0)
-  const q = (await transform(page))(-75, 0)
+  const q = (await canvasTransform(page))(-75, 0)
   expect(Math.abs(q.x - p.x) + Math.abs(q.y - p.y)).toBeLessThan(0.5)
 })
 
@@ -282,12 +264,12 @@ test('a dragged vertex waits for its analysis: drawing and properties change in 
   await page.getByTestId('new-sketch').click()
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
   await page.getByTestId('tool-box').click()
-  let at = await transform(page)
-  await drag(page, at(-100, -50), at(100, 50))
+  let at = await canvasTransform(page)
+  await dragMouse(page, at(-100, -50), at(100, 50))
   await expectArea(page, 200 * 100)
 
   // A prompt answer: record, per animation frame, when the vertex table and the area change.
-  at = await transform(page)
+  at = await canvasTransform(page)
   await page.mouse.click(at(0, 0).x, at(0, 0).y)
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('100')
   // Sample both in every animation frame, as it is about to be painted.
@@ -307,7 +289,7 @@ test('a dragged vertex waits for its analysis: drawing and properties change in 
     }
     requestAnimationFrame(tick)
   })
-  await drag(page, at(100, 50), at(140, 50))
+  await dragMouse(page, at(100, 50), at(140, 50))
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('140')
   await expectArea(page, shoelace(await readVertices(page)))
   const seen = await page.evaluate(() => (window as unknown as { kwSeen: Record<string, number> }).kwSeen)
@@ -321,7 +303,7 @@ test('a dragged vertex waits for its analysis: drawing and properties change in 
     await route.continue()
   })
   const t0 = Date.now()
-  await drag(page, at(140, 50), at(140, 90))
+  await dragMouse(page, at(140, 50), at(140, 90))
   await expect(page.getByTestId('vertex-2-y')).toHaveValue('90', { timeout: 2000 })
   expect(Date.now() - t0).toBeLessThan(2500)
   await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'pending')
@@ -344,7 +326,7 @@ test('a vertex of a 2 000-vertex section can be dragged (its speed is measured b
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
   await expectArea(page, (n * 500 * 500 * Math.sin((2 * Math.PI) / n)) / 2, 1e-9) // regular n-gon, exact
 
-  const at = await transform(page)
+  const at = await canvasTransform(page)
   await page.mouse.click(at(0, 0).x, at(0, 0).y)
   const from = at(500, 0)
   await page.mouse.move(from.x, from.y)
@@ -367,24 +349,24 @@ test('round and tube by centre and radius, rotation by the handle, space-drag pa
   await expect(page.locator('html[data-hydrated="true"]')).toHaveCount(1)
 
   // A round bar of diameter 100: its inscribed polygon is within the 0.05 mm chord tolerance of πr².
-  let at = await transform(page)
+  let at = await canvasTransform(page)
   await page.getByTestId('tool-round').click()
-  await drag(page, at(-150, 0), at(-100, 0))
+  await dragMouse(page, at(-150, 0), at(-100, 0))
   await expectArea(page, Math.PI * 50 ** 2, 3e-3)
   // A tube of outside diameter 100 and the default 8 mm wall beside it.
   await page.getByTestId('tool-tube').click()
-  await drag(page, at(150, 0), at(200, 0))
+  await dragMouse(page, at(150, 0), at(200, 0))
   await expectArea(page, Math.PI * 50 ** 2 + (Math.PI / 4) * (100 ** 2 - 84 ** 2), 3e-3)
   await shot(page, 'sketcher-round-tube')
 
   // The handle above the selected tube turns it about its centre: drag it a quarter turn to the left.
-  at = await transform(page)
+  at = await canvasTransform(page)
   const handle = at(150, 50)
   handle.y -= 28
   const left = at(150 - 100, 0)
   const firstBefore = [num(await page.getByTestId('vertex-0-x').inputValue()), num(await page.getByTestId('vertex-0-y').inputValue())]
   expect(firstBefore).toEqual([200, 0]) // circles start on +x
-  await drag(page, handle, left)
+  await dragMouse(page, handle, left)
   await expect(page.getByTestId('vertex-0-x')).toHaveValue('150')
   await expect(page.getByTestId('vertex-0-y')).toHaveValue('50') // (200, 0) turned +90° about (150, 0)
 
@@ -392,12 +374,12 @@ test('round and tube by centre and radius, rotation by the handle, space-drag pa
   const panX0 = Number(await page.getByTestId('sketch-canvas').getAttribute('data-pan-x'))
   await page.getByTestId('sketch-canvas').focus()
   await page.keyboard.down('Space')
-  await drag(page, at(0, -200), { x: at(0, -200).x + 120, y: at(0, -200).y })
+  await dragMouse(page, at(0, -200), { x: at(0, -200).x + 120, y: at(0, -200).y })
   await page.keyboard.up('Space')
   await expect.poll(async () => Number(await page.getByTestId('sketch-canvas').getAttribute('data-pan-x'))).toBeCloseTo(panX0 + 120, 0)
 
   // A bow-tie outline crosses itself: the server says so and the editor marks the part and vertex.
-  at = await transform(page)
+  at = await canvasTransform(page)
   await page.getByTestId('tool-outline').click()
   for (const [x, y] of [[-50, -150], [50, -250], [50, -150], [-50, -250]] as const) await page.mouse.click(at(x, y).x, at(x, y).y)
   await page.keyboard.press('Enter')
@@ -419,8 +401,8 @@ test('after a lost race "Reload theirs" shows the version saved elsewhere', asyn
   expect((await page.request.patch(`/api/sketches/${id}`, { headers: SAME_ORIGIN, data: { version, document: theirs } })).status()).toBe(200)
 
   await page.getByTestId('tool-box').click()
-  const at = await transform(page)
-  await drag(page, at(0, 0), at(100, 40))
+  const at = await canvasTransform(page)
+  await dragMouse(page, at(0, 0), at(100, 40))
   await expect(page.getByTestId('save-conflict')).toBeVisible({ timeout: 5000 })
   await page.getByTestId('reload-theirs').click()
   await expect(page.getByTestId('save-conflict')).toHaveCount(0)

@@ -30,3 +30,21 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByRole('button', { name: 'Sign in' }).click()
   await expect(page.getByTestId('sign-out')).toBeVisible()
 }
+
+/** The canvas transform as the editor publishes it: screen = (panX + zoom·x, panY − zoom·y). */
+export async function canvasTransform(page: Page): Promise<(x: number, y: number) => { x: number; y: number }> {
+  const canvas = page.getByTestId('sketch-canvas')
+  const box = (await canvas.boundingBox())!
+  const zoom = Number(await canvas.getAttribute('data-zoom'))
+  const panX = Number(await canvas.getAttribute('data-pan-x'))
+  const panY = Number(await canvas.getAttribute('data-pan-y'))
+  return (x: number, y: number) => ({ x: box.x + panX + zoom * x, y: box.y + panY - zoom * y })
+}
+
+/** Drags the mouse in small steps, as a person would. */
+export async function dragMouse(page: Page, from: { x: number; y: number }, to: { x: number; y: number }): Promise<void> {
+  await page.mouse.move(from.x, from.y)
+  await page.mouse.down()
+  for (let k = 1; k <= 8; k++) await page.mouse.move(from.x + ((to.x - from.x) * k) / 8, from.y + ((to.y - from.y) * k) / 8)
+  await page.mouse.up()
+}
