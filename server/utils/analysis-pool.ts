@@ -109,6 +109,10 @@ function finish(slot: Slot, reply: AnalysisReply): void {
   slot.busy = null
   release(p)
   if ('json' in reply) p.resolve({ json: reply.json })
+  else if ('invalid' in reply) {
+    const e = reply.invalid
+    p.reject(createError({ statusCode: e.status, statusMessage: e.status === 413 ? 'Payload Too Large' : 'Bad Request', message: e.message, data: e.data }))
+  }
   else if ('sectionError' in reply) {
     const e = reply.sectionError
     p.reject(createError({ statusCode: 422, statusMessage: 'Unprocessable Geometry', message: e.message, data: { part: e.part, ring: e.ring, vertex: e.vertex, cut: e.cut ?? null } }))
@@ -156,11 +160,29 @@ export async function analyseInPool(event: H3Event, input: Input, text: string):
   // Torsion meshes and solves (up to a second or two) whatever the vertex count: always in a worker.
   const heavy = input.torsion === true || vertices > config.inlineVertices
   if (!file || !heavy) return withSectionErrors(() => analyseSection(input))
-  while (slots.length < config.workers) slots.push(spawn(file))
+  return toWorker(event, file, text)
+}
+
+/** A body this large (bytes of JSON) goes to a worker unread: about 2 000 vertices, where the pool starts anyway. */
+export const WORKER_BODY_BYTES = 64 * 1024
+
+/**
+ * The analysis of a large request body, read, checked and analysed in a worker (the event loop
+ * does not parse it); null when there is no worker (development), so the caller reads it itself.
+ */
+export async function analyseTextInPool(event: H3Event, text: string): Promise<WorkerAnswer | null> {
+  config ??= settings()
+  const file = findWorkerFile()
+  if (!file) return null
+  return toWorker(event, file, text)
+}
+
+function toWorker(event: H3Event, file: string, text: string): Promise<WorkerAnswer> {
+  while (slots.length < config!.workers) slots.push(spawn(file))
   const account = String((event.context.kwUser as { id?: string } | undefined)?.id ?? clientAddress(event))
   const mine = perAccount.get(account) ?? 0
-  if (mine >= config.perAccount) busy(event, `You have ${mine} analyses running already (the limit is ${config.perAccount}); wait for one to finish.`)
-  if (queue.length >= config.queue) busy(event, 'The server is busy with other analyses; try again in 2 s.')
+  if (mine >= config!.perAccount) busy(event, `You have ${mine} analyses running already (the limit is ${config!.perAccount}); wait for one to finish.`)
+  if (queue.length >= config!.queue) busy(event, 'The server is busy with other analyses; try again in 2 s.')
   perAccount.set(account, mine + 1)
   return new Promise<WorkerAnswer>((resolve, reject) => {
     queue.push({ job: { id: nextId++, text }, account, resolve, reject })

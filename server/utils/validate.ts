@@ -2,16 +2,10 @@ import type { H3Event } from 'h3'
 import type { z } from 'zod'
 import { findUnsafeText } from '../../shared/text/safe-text'
 
-/** Turns zod issues into one sentence a person can act on: "email: Enter a valid e-mail address". */
-export function describeIssues(error: z.ZodError): string {
-  return error.issues
-    .slice(0, 5)
-    .map((issue) => {
-      const path = issue.path.map(String).join('.')
-      return path ? `${path}: ${issue.message}` : issue.message
-    })
-    .join('; ')
-}
+import { describeIssues } from '../../shared/text/issues'
+
+/** Turns zod issues into one sentence a person can act on (shared with the analysis worker). */
+export { describeIssues }
 
 /** Parses `value` with `schema` or throws a 400 `{statusCode, message}` naming each bad field. */
 export function parseOr400<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {

@@ -4,12 +4,11 @@
 // section's rings cross the thread boundary as one string, not as hundreds of thousands of
 // cloned arrays. Bad geometry comes back as the SectionError's fields.
 import { parentPort } from 'node:worker_threads'
-import { analysisAnswer, NOT_FINITE_MESSAGE } from '../../shared/analysis/answer'
-import { AnalysisRequest } from '../../shared/analysis/contract'
+import { analysisAnswer, NOT_FINITE_MESSAGE, readAnalysisText, type BodyProblem } from '../../shared/analysis/answer'
 import { analyseSection } from '../../shared/mechanics/analyze'
 import { SectionError } from '../../shared/mechanics/types'
 
-/** A job from the pool: an id to answer with and the request body as JSON text (already validated by the route). */
+/** A job from the pool: an id to answer with and the request body as JSON text (read and checked here as the route would). */
 export interface AnalysisJob {
   id: number
   text: string
@@ -18,15 +17,18 @@ export interface AnalysisJob {
 /** What the worker answers: the answer as JSON text, a geometry error, or an unexpected failure. */
 export type AnalysisReply =
   | { id: number; json: string }
+  | { id: number; invalid: BodyProblem }
   | { id: number; sectionError: { message: string; part: number | null; ring: number | null; vertex: number | null; cut?: number | null } }
   | { id: number; failure: string }
 
 parentPort?.on('message', (job: AnalysisJob) => {
   let reply: AnalysisReply
   try {
-    const input = AnalysisRequest.parse(JSON.parse(job.text))
-    const answer = analysisAnswer(analyseSection(input), input.omit)
-    reply = answer
+    const read = readAnalysisText(job.text)
+    const answer = read.ok ? analysisAnswer(analyseSection(read.body), read.body.omit) : null
+    reply = !read.ok
+      ? { id: job.id, invalid: read.problem }
+      : answer
       ? { id: job.id, json: JSON.stringify(answer) }
       : { id: job.id, sectionError: { message: NOT_FINITE_MESSAGE, part: null, ring: null, vertex: null } }
   } catch (error) {
