@@ -302,10 +302,9 @@ test('a dragged vertex waits for its analysis: drawing and properties change in 
     await new Promise(r => setTimeout(r, 3000))
     await route.continue()
   })
-  const t0 = Date.now()
   await dragMouse(page, at(140, 50), at(140, 90))
   await expect(page.getByTestId('vertex-2-y')).toHaveValue('90', { timeout: 2000 })
-  expect(Date.now() - t0).toBeLessThan(2500)
+  // The edit is in while its answer is still outstanding: a state, not a measured duration.
   await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'pending')
   await expect(page.getByTestId('properties-status')).toHaveText('updating…')
   await page.unroute('**/api/analysis')

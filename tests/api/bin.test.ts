@@ -16,7 +16,9 @@ beforeAll(async () => {
 function age(id: string, days: number): Promise<void> {
   return new Promise((resolve, reject) => {
     const db = new sqlite3.Database(join(server.dir, 'test.sqlite'))
-    db.run('UPDATE sketches SET deletedAt = ? WHERE id = ?', [new Date(Date.now() - days * 86_400_000).toISOString().replace('T', ' ').replace('Z', ' +00:00'), id], (error) => {
+    const when = new Date()
+    when.setUTCDate(when.getUTCDate() - days)
+    db.run('UPDATE sketches SET deletedAt = ? WHERE id = ?', [when.toISOString().replace('T', ' ').replace('Z', ' +00:00'), id], (error) => {
       db.close()
       if (error) reject(error)
       else resolve()
@@ -28,12 +30,14 @@ describe('recently deleted sketches', () => {
   it('GET /api/sketches?deleted=true lists what I deleted, newest first, with deletedAt; the normal list does not', async () => {
     const a = (await owner.post('/api/sketches', { title: 'First' })).body
     const b = (await owner.post('/api/sketches', { title: 'Second' })).body
+    const beforeDelete = new Date()
     expect((await owner.delete(`/api/sketches/${a.id}`)).status).toBe(200)
     expect((await owner.delete(`/api/sketches/${b.id}`)).status).toBe(200)
     const bin = await owner.get('/api/sketches?deleted=true')
     expect(bin.status).toBe(200)
     expect(bin.body.sketches.map((s: { title: string }) => s.title)).toEqual(['Second', 'First'])
-    expect(Date.parse(bin.body.sketches[0].deletedAt)).toBeGreaterThan(Date.now() - 60_000)
+    // deletedAt is when the delete happened: not before the test asked for it (to the second, as stored).
+    expect(Date.parse(bin.body.sketches[0].deletedAt)).toBeGreaterThanOrEqual(beforeDelete.getTime() - 1000)
     const list = await owner.get('/api/sketches')
     expect(list.body.sketches.map((s: { id: string }) => s.id)).not.toContain(a.id)
     expect((await owner.post(`/api/sketches/${a.id}/restore`)).status).toBe(200)
