@@ -363,8 +363,8 @@ test('round and tube by centre and radius, rotation by the handle, space-drag pa
   const handle = at(150, 50)
   handle.y -= 28
   const left = at(150 - 100, 0)
-  const firstBefore = [num(await page.getByTestId('vertex-0-x').inputValue()), num(await page.getByTestId('vertex-0-y').inputValue())]
-  expect(firstBefore).toEqual([200, 0]) // circles start on +x
+  // Circles start on +x: wait for the vertex table to show the tube's first vertex (it follows the selection).
+  await expect.poll(async () => [num(await page.getByTestId('vertex-0-x').inputValue()), num(await page.getByTestId('vertex-0-y').inputValue())]).toEqual([200, 0])
   await dragMouse(page, handle, left)
   await expect(page.getByTestId('vertex-0-x')).toHaveValue('150')
   await expect(page.getByTestId('vertex-0-y')).toHaveValue('50') // (200, 0) turned +90° about (150, 0)
