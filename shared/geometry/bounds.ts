@@ -17,6 +17,11 @@ export function ringsBounds(rings: readonly Ring[]): Bounds | null {
   return minX <= maxX ? { minX, minY, maxX, maxY } : null
 }
 
+/** Whether two boxes overlap or come within `gap` mm of each other (touching counts). */
+export function boxesNear(a: Bounds, b: Bounds, gap = 0): boolean {
+  return a.minX <= b.maxX + gap && b.minX <= a.maxX + gap && a.minY <= b.maxY + gap && b.minY <= a.maxY + gap
+}
+
 /** Diagonal (mm) of the bounding box of a ring: a length scale for tolerances; at least 1 (also when empty or degenerate). */
 export function ringExtent(ring: Ring): number {
   const b = ringsBounds([ring])

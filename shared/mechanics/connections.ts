@@ -1,7 +1,7 @@
-import { ringsBounds } from '../geometry/bounds'
+import { boxesNear, ringsBounds } from '../geometry/bounds'
 import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { polygonMoments, zeroMoments } from '../geometry/moments'
-import type { Bounds, Polygon, Ring } from '../geometry/types'
+import type { Polygon, Ring } from '../geometry/types'
 import type { InertiaLike } from './stress'
 import { SectionError } from './types'
 
@@ -71,7 +71,7 @@ export function connectionShearFlows(props: InertiaLike, parts: readonly Connect
     for (let b = a + 1; b < parts.length; b++) {
       const boxA = boxes[a]
       const boxB = boxes[b]
-      if (!boxA || !boxB || !near(boxA, boxB, tolerance)) continue
+      if (!boxA || !boxB || !boxesNear(boxA, boxB, tolerance)) continue
       const length = contactLength(owned[a]!, owned[b]!, tolerance)
       if (length > tolerance) found.push({ a, b, length })
     }
@@ -123,7 +123,7 @@ function ownedPieces(parts: readonly ConnectionPart[]): Polygon[][] {
       if (pa.materialKey !== pb.materialKey || pa.polygons.length === 0 || pb.polygons.length === 0) continue
       const ba = ringsBounds(pa.polygons.map((p) => p[0]!))!
       const bb = ringsBounds(pb.polygons.map((p) => p[0]!))!
-      if (!near(ba, bb, 0)) continue
+      if (!boxesNear(ba, bb)) continue
       const overlap = polygonsArea(polygonBoolean('intersection', [pa.polygons, pb.polygons]))
       if (!(overlap > 1e-9 * Math.min(polygonsArea(pa.polygons), polygonsArea(pb.polygons)))) continue
       anyOverlap = true
@@ -146,11 +146,6 @@ function ownedPieces(parts: readonly ConnectionPart[]): Polygon[][] {
     }
   }
   return owned
-}
-
-/** Whether two boxes come within `gap` mm of each other. */
-function near(a: Bounds, b: Bounds, gap: number): boolean {
-  return a.minX <= b.maxX + gap && b.minX <= a.maxX + gap && a.minY <= b.maxY + gap && b.minY <= a.maxY + gap
 }
 
 /**

@@ -92,11 +92,12 @@ export function plasticModuli(prepared: PreparedSection, theta = 0): PlasticResu
   const xc = origin[0]
   const yc = origin[1]
   const ext = Math.max(bounds.maxX - bounds.minX, bounds.maxY - bounds.minY)
+  // One material: Mp = fy·Z with its own fy (none for a no-tension material).
+  const fy = typeof regions[0]!.material.fy === 'number' && !regions[0]!.material.noTension ? regions[0]!.material.fy : null
   const axis = (nx: number, ny: number): { t: number; result: PlasticAxis } => {
     const found = plasticAxis(rings, nx, ny, ext)
     const { Mp, MpNeg } = found
     const t = found.t + nx * xc + ny * yc
-    const fy = typeof regions[0]!.material.fy === 'number' && !regions[0]!.material.noTension ? regions[0]!.material.fy : null
     if (method === 'geometric') return { t, result: { offset: t, Mp: fy === null ? null : fy * Mp, MpNeg: fy === null ? null : fy * MpNeg, Z: Mp } }
     if (method === 'unavailable') return { t, result: { offset: t, Mp: null, MpNeg: null, Z: null } }
     return { t, result: { offset: t, Mp, MpNeg, Z: fyRef === null ? null : Math.min(Mp, MpNeg) / fyRef } }

@@ -1,4 +1,4 @@
-import { ringsBounds } from '../geometry/bounds'
+import { boxesNear, ringsBounds } from '../geometry/bounds'
 import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { regionsHull } from '../geometry/hull'
 import { findRingsIntersection, type RingsIntersection } from '../geometry/intersections'
@@ -200,7 +200,7 @@ function netPolygons(part: CleanPart, j: number, cuts: readonly Point[][], cutHi
   let box: Bounds | null = null
   cuts.forEach((cutRing, k) => {
     box ??= ringsBounds([part.outline])!
-    if (!boxesOverlap(ringsBounds([cutRing])!, box)) return
+    if (!boxesNear(ringsBounds([cutRing])!, box)) return
     const cutArea = -ringArea(cutRing)
     let cut: number
     if (findRingsIntersection([part.outline, cutRing]) !== null) cut = overlapArea([[part.outline]], [[cutRing]])
@@ -231,7 +231,7 @@ function checkMaterialOverlaps(clean: readonly CleanPart[], nets: readonly Polyg
     for (let j = i + 1; j < clean.length; j++) {
       if (materialKey(clean[i]!.material) === materialKey(clean[j]!.material)) continue
       if (nets[i]!.length === 0 || nets[j]!.length === 0) continue
-      if (!boxesOverlap(ringsBounds([clean[i]!.outline])!, ringsBounds([clean[j]!.outline])!)) continue
+      if (!boxesNear(ringsBounds([clean[i]!.outline])!, ringsBounds([clean[j]!.outline])!)) continue
       const a = clean[i]!.outline
       const b = clean[j]!.outline
       if (findRingsIntersection([a, b]) === null && !pointInRing(a[0]!, b) && !pointInRing(b[0]!, a)) continue
@@ -272,9 +272,6 @@ export function materialKey(material: Material): string {
 }
 
 
-function boxesOverlap(a: Bounds, b: Bounds): boolean {
-  return a.minX <= b.maxX && b.minX <= a.maxX && a.minY <= b.maxY && b.minY <= a.maxY
-}
 
 /** A coordinate rounded for a message. */
 function round(value: number): string {
