@@ -29,7 +29,6 @@ export function useSketchExport() {
 
   /** Makes the file of `kind` and hands it to the browser as a download; false when it could not be made. */
   async function run(kind: ExportKind): Promise<boolean> {
-    sketch.flushStaged()
     busy.value = true
     try {
       // The unit system with the area and inertia units chosen in the settings bar.

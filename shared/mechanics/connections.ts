@@ -2,7 +2,7 @@ import { boxesNear, ringsBounds } from '../geometry/bounds'
 import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { polygonMoments, zeroMoments } from '../geometry/moments'
 import type { Polygon, Ring } from '../geometry/types'
-import type { InertiaLike } from './stress'
+import { inertiaDeterminant, type InertiaLike } from './stress'
 import { SectionError } from './types'
 
 /** One part for {@link connectionShearFlows}: index and name, n = E / E_ref, a material key, and its net polygons (mm). */
@@ -59,8 +59,8 @@ export const CONTACT_TOLERANCE = 0.1
  */
 export function connectionShearFlows(props: InertiaLike, parts: readonly ConnectionPart[], Vx: number, Vy: number, tolerance = CONTACT_TOLERANCE): ConnectionResult {
   const { Ixx, Iyy, Ixy } = props
-  const D = Ixx * Iyy - Ixy * Ixy
-  if (!(props.area > 0) || !(Ixx > 0) || !(Iyy > 0) || !(D > 1e-12 * Ixx * Iyy)) {
+  const D = inertiaDeterminant(props)
+  if (D === null) {
     throw new SectionError('The section has no area or no bending stiffness, so no shear flow can be computed.')
   }
   if (!Number.isFinite(Vx) || !Number.isFinite(Vy)) throw new SectionError('The shear forces must be finite numbers.')

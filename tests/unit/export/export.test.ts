@@ -8,7 +8,7 @@ import { exportJson, importJson, isKernwiseJson } from '../../../shared/export/j
 import { EXPORT_COLOURS, exportSvg } from '../../../shared/export/svg'
 import { formatNumber } from '../../../shared/editor/units'
 import { importDxf } from '../../../shared/import/dxf'
-import { signedArea } from '../../../shared/import/geometry'
+import { ringArea as signedArea } from '../../../shared/geometry/moments'
 import { analyseSection } from '../../../shared/mechanics/analyze'
 import { SketchDocumentSchema } from '../../../shared/sketch/document'
 
