@@ -3,7 +3,7 @@ import { nextTick, ref, shallowRef, watch } from 'vue'
 import type { AnalysisRequestBody, AnalysisResponse } from '#shared/analysis/contract'
 import { analysisRequestFor, locateError, type ErrorLocation } from '#shared/editor/analysis-request'
 import type { SketchDocument } from '#shared/sketch/document'
-import { errorMessage, errorStatus } from '~~/composables/api'
+import { errorMessage, errorStatus } from '#shared/utils/errors'
 import { useSketchStore } from './sketch'
 
 /** The answer for one document revision: the result, or the error (the last good result is kept by the reader). */

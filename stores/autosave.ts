@@ -1,7 +1,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
 import type { SketchFull } from '#shared/sketch/api'
-import { errorMessage, errorStatus } from '~~/composables/api'
+import { errorMessage, errorStatus } from '#shared/utils/errors'
 import { useSketchStore } from './sketch'
 
 /** Save state shown by the indicator. */

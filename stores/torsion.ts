@@ -4,7 +4,7 @@ import type { AnalysisRequestBody } from '#shared/analysis/contract'
 import { analysisRequestFor } from '#shared/editor/analysis-request'
 import type { TorsionResult } from '#shared/mechanics/torsion/analysis'
 import type { TorsionMeshDensity } from '#shared/mechanics/torsion/types'
-import { errorMessage } from '~~/composables/api'
+import { errorMessage } from '#shared/utils/errors'
 import { useDisplayStore } from './display'
 import { useSketchStore } from './sketch'
 
