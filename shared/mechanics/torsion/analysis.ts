@@ -3,7 +3,7 @@ import { SectionError, type Material, type PreparedSection } from '../types'
 import { meshSection } from './mesh'
 import { solveSectionFe, type SectionSolution } from './section-fe'
 import { shearStressField, type ShearStressField, type TorsionLoads } from './shear-stress'
-import type { TorsionMeshDensity, TorsionRegion } from './types'
+import type { TorsionMeshDensity, TorsionPoint, TorsionRegion } from './types'
 
 /** Poisson's ratio when a material gives none: 0.3, structural steel (common practice). */
 export const DEFAULT_POISSON = 0.3
@@ -44,6 +44,11 @@ export interface TorsionResult {
   Cw: number
   shearCentre: { x: number; y: number }
   shearAreas: { x: number; y: number }
+  /**
+   * Largest |τ| per unit torque T about the shear centre (MPa per N·mm, i.e. 1/mm³) and where it is
+   * (section coordinates, mm): τ_max = value · T for uniform torsion.
+   */
+  torsionStress: TorsionPoint
   /** Poisson's ratio used by the flexure functions (E·A-weighted mean of the materials). */
   nu: number
   referenceG: number
@@ -94,6 +99,7 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
   if (sol.pieces > 1) warnings.push(`The section is ${sol.pieces} separate pieces: J is their sum, and the shear centre and Cw treat them as acting together.`)
   const result: TorsionResult = {
     ...summary(sol, ox, oy),
+    torsionStress: shearStressField(sol, { Vx: 0, Vy: 0, T: 1 }, ox, oy).max,
     nu: sol.nu,
     referenceG,
     equivalent: prepared.regions.length > 1,
