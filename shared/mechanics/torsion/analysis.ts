@@ -3,6 +3,7 @@ import { SectionError, type Material, type PreparedSection } from '../types'
 import { meshSection } from './mesh'
 import { solveSectionFe, type SectionSolution } from './section-fe'
 import { shearStressField, type ShearStressField, type TorsionLoads } from './shear-stress'
+import { lineShearFlows, type LineFlow, type LineSegment } from './line-flow'
 import type { TorsionMeshDensity, TorsionPoint, TorsionRegion } from './types'
 
 /** Poisson's ratio when a material gives none: 0.3, structural steel (common practice). */
@@ -15,6 +16,8 @@ export interface TorsionOptions {
   readonly mesh?: TorsionMeshDensity
   readonly study?: boolean
   readonly loads?: TorsionLoads
+  /** Lines across the section (section coordinates, mm) whose shear flow per unit Vx and Vy is wanted (the connections). */
+  readonly lines?: readonly (readonly LineSegment[])[]
 }
 
 /** The torsion fields of an analysis request (see shared/analysis/torsion-contract.ts). */
@@ -59,6 +62,13 @@ export interface TorsionResult {
   iterations: number
   study?: { rows: TorsionStudyRow[]; difference: { J: number; shearCentre: number } }
   stress?: ShearStressField
+  /** Shear flow per unit Vx and Vy across each of `options.lines`, in their order (N/mm per N). */
+  lineFlows?: LineFlow[]
+  /**
+   * Per connection (analyze.ts), from the finite element shear solution for Vx, Vy through the shear
+   * centre: q across its line (N/mm, positive from the first part into the second) and per unit Vx, Vy (1/mm).
+   */
+  connections?: { parts: [number, number]; q: number; qVx: number; qVy: number }[]
   warnings: string[]
 }
 
@@ -125,6 +135,7 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
     }
   }
   if (options.loads) result.stress = shearStressField(sol, options.loads, ox, oy)
+  if (options.lines?.length) result.lineFlows = lineShearFlows(sol, options.lines, ox, oy)
   return result
 }
 
