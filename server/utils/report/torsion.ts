@@ -82,8 +82,33 @@ export function torsionPage(doc: Doc, input: ReportInput): void {
       study.rows.map(r => [r.density, String(r.nodes), String(r.elements), v(r.J, 'inertia', sys), `${v(cleanZero(r.shearCentre.x, ext), 'length', sys)}, ${v(cleanZero(r.shearCentre.y, ext), 'length', sys)}`]), 'Mesh study')
     para(doc, `Mesh study: J differs by ${formatNumber(study.difference.J * 100, 3)} % and the shear centre moves by ${q(study.difference.shearCentre, 'length', sys)} between the two densities. ${convergenceWord(study)}`, 8)
   }
+  connectionFlows(doc, input, width)
   for (const w of t.warnings) para(doc, `Warning: ${w}`, 7.5)
   methodBlock(doc)
+}
+
+/** lbf/in per N/mm (1 N/mm = 1000/4.448222 lbf/m = 5.710 lbf/in, NIST SP 811 factors). */
+const LBF_PER_IN_PER_N_PER_MM = 25.4 / 4.4482216152605
+
+/** Shear flow per connection for the sketch's Vx, Vy: exact where a cut frees a side, from the FE solution where the parts close a cell. */
+function connectionFlows(doc: Doc, input: ReportInput, width: number): void {
+  const a = input.analysis!
+  if (!a.connections.length) return
+  const sys = input.doc.settings
+  const us = sys.units === 'US'
+  const unit = us ? 'lbf/in' : 'N/mm'
+  const shear = input.doc.settings.shear
+  heading(doc, 'Shear flow per connection')
+  para(doc, `For Vx = ${q(shear.Vx, 'force', sys)} and Vy = ${q(shear.Vy, 'force', sys)} (the shear setting), through the shear centre.`, 8)
+  const fe = a.torsion?.connections ?? []
+  table(doc, [{ header: 'Connection', width: 200 }, { header: `Contact (${u('length', sys)})`, width: 80, align: 'right' }, { header: `|q| (${unit})`, width: 80, align: 'right' }, { header: 'Source', width: width - 360 }],
+    a.connections.map((c) => {
+      const f = fe.find(k => k.parts[0] === c.parts[0] && k.parts[1] === c.parts[1])
+      const value = c.q ?? f?.q ?? null
+      const text = value === null ? '—' : formatNumber(Math.abs(value) * (us ? LBF_PER_IN_PER_N_PER_MM : 1), 4)
+      const source = c.q !== null ? 'V·Q/I of the side the cut frees (exact)' : f ? 'finite element shear solution (closed cell)' : 'closed cell: not statically determinate'
+      return [`${c.names[0]} – ${c.names[1]}`, v(c.length, 'length', sys), text, source]
+    }), 'Shear flow per connection')
 }
 
 /** A plain reading of the mesh study for a checker. */

@@ -139,3 +139,24 @@ describe('the torsion page', () => {
     expect(await text(base)).not.toContain('Torsion and shear (finite elements')
   })
 })
+
+describe('the torsion page: shear flow per connection', () => {
+  const plate = (id: string, name: string, x: number, y: number, w: number, h: number) => ({ id, name, outline: [[x, y], [x + w, y], [x + w, y + h], [x, y + h]], material: { name: 'Steel', E: 200000 }, shape: null })
+  const box = SketchDocumentSchema.parse({
+    schema: 'kernwise.sketch/2',
+    parts: [plate('t', 'Top', -100, 140, 200, 10), plate('r', 'Right', 90, -140, 10, 280), plate('b', 'Bottom', -100, -150, 200, 10), plate('l', 'Left', -100, -140, 10, 280)],
+    cases: [{ id: 'c', name: 'Dead', Mx: 0, My: 0 }],
+    loads: [],
+    settings: { shear: { Vx: 0, Vy: 100000 } },
+  })
+  it('a box of four plates lists each weld with |q| from the FE solution, Vy·Q/Ixx of half a flange within 1 % (thin-walled closed-cell result)', async () => {
+    const analysis = analyseSection({ ...AnalysisRequest.parse(analysisRequestFor(box)), checkTable: true, torsion: true })
+    const t = await text({ ...base, doc: box, analysis })
+    const Ixx = 2 * (200 * 10 ** 3 / 12 + 2000 * 145 ** 2) + 2 * (10 * 280 ** 3 / 12) // parallel axes by hand
+    const expected = (100000 * 100 * 10 * 145) / Ixx
+    const rows = [...t.matchAll(/Top – Right\s+10\s+([0-9.]+)\s+finite element shear solution \(closed cell\)/g)]
+    expect(rows).toHaveLength(1)
+    expect(Math.abs(Number(rows[0]![1]) - expected) / expected).toBeLessThan(0.01)
+    expect(t.match(/finite element shear solution \(closed cell\)/g)).toHaveLength(4)
+  })
+})
