@@ -102,9 +102,10 @@ describe('GET /api/sketches/:id/report.pdf', () => {
     const { text } = await pdfPages(`/api/sketches/${id}/report.pdf`)
     const page = text.find(p => p.includes('Torsion and shear (finite elements on the section)'))
     expect(page).toBeDefined()
-    const m = page!.match(/J torsion constant\s+([0-9.]+) × 10\^([0-9]+) mm\^4/)
+    // "766 400 mm^4" or "7.664 × 10^5 mm^4" (formatNumber groups thousands with a thin space).
+    const m = page!.match(/J torsion constant\s+([0-9.,\s\u2009\u202f]+?)(?: × 10\^([0-9]+))? mm\^4/)
     expect(m).not.toBeNull()
-    const printed = Number(m![1]) * 10 ** Number(m![2])
+    const printed = Number(m![1]!.replace(/[\s,\u2009\u202f]/g, '')) * 10 ** Number(m![2] ?? 0)
     const api = await owner.post('/api/analysis', { parts: plateDoc.parts, torsion: true })
     expect(api.status).toBe(200)
     expect(Math.abs(printed - api.body.torsion.J) / api.body.torsion.J).toBeLessThan(5e-4) // four significant digits
