@@ -69,7 +69,7 @@ test('a box of four welded plates: the closed-cell welds show |q| from the FE sh
   const expected = (100_000 * 100 * 10 * 145) / Ixx
   for (let i = 0; i < 4; i++) {
     await expect(rows.nth(i)).toHaveAttribute('data-status', 'closed-cell')
-    await expect(page.getByTestId(`shear-source-${i}`)).toContainText('FE shear solution')
+    await expect(page.getByTestId(`shear-source-${i}`)).toContainText('from the FE shear solution')
     const q = Number(await page.getByTestId(`shear-q-${i}`).getAttribute('data-value'))
     expect(Math.abs(q - expected) / expected).toBeLessThan(0.01)
   }

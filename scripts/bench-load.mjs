@@ -1,6 +1,8 @@
 // npm run bench:load: autocannon on loopback against the built server with a temporary database.
 // Prints requests/s and latency percentiles for health, a sketch list and 1 000-vertex analyses
 // (10 connections, so the server is saturated: this is throughput, npm run bench has the latency).
+// BENCH_CPU_PROF=dir writes the server's CPU profiles there (node --cpu-prof, main thread and
+// workers); BENCH_ONLY=analysis runs only the 1 000-vertex analyses (1, 4 and 10 clients).
 import { mkdtempSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
@@ -30,9 +32,11 @@ async function run(url, title, opts) {
 buildIfStale()
 const dir = mkdtempSync(join(tmpdir(), 'kernwise-load-'))
 const port = await freePort()
+const profile = process.env.BENCH_CPU_PROF
+const only = process.env.BENCH_ONLY
 const { child, url } = await startServer({ PORT: String(port), NUXT_DB_PATH: join(dir, 'load.sqlite'), NUXT_SESSION_PASSWORD: 'bench-only-session-password-0123456789abcdef',
   // One bench account drives up to 10 connections: lift the per-account analysis limit (default 4) for it.
-  NUXT_ANALYSIS_PER_ACCOUNT: '16' })
+  NUXT_ANALYSIS_PER_ACCOUNT: '16' }, { nodeArgs: profile ? ['--cpu-prof', `--cpu-prof-dir=${profile}`] : [] })
 try {
   const reg = await fetch(`${url}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json', origin: url }, body: JSON.stringify({ email: 'bench@load.test', password: 'bench-password-123', name: 'Bench' }) })
   const cookie = reg.headers.getSetCookie().map(c => c.split(';')[0]).join('; ')
@@ -41,6 +45,23 @@ try {
   for (let i = 0; i < 20; i++) await fetch(`${url}/api/sketches`, { method: 'POST', headers: auth, body: JSON.stringify({ title: `Bench ${i}` }) })
   const body = JSON.stringify({ parts: [{ outline: ring(1000, 200), holes: [], material: { E: 200000 } }], loads: [{ P: 320000, x: 40, y: 25 }] })
 
+  if (only === 'analysis') {
+    await run(`${url}/api/analysis`, 'analysis-1000-vertices-1-client', { method: 'POST', headers: auth, body, connections: 1 })
+    await run(`${url}/api/analysis`, 'analysis-1000-vertices-4-clients', { method: 'POST', headers: auth, body, connections: 4 })
+    await run(`${url}/api/analysis`, 'analysis-1000-vertices', { method: 'POST', headers: auth, body })
+  } else {
+    await all(url, auth, body)
+  }
+} finally {
+  child.kill('SIGTERM')
+  // Give --cpu-prof time to write its profiles on exit.
+  if (profile) await new Promise(r => child.once('exit', r))
+  rmSync(dir, { recursive: true, force: true })
+}
+
+/** Every figure: health, the sketch list, analyses at 1, 10 and 4 clients, and health during heavy analyses. */
+async function all(url, auth, body) {
+  const one = await run(`${url}/api/analysis`, 'analysis-1000-vertices-1-client', { method: 'POST', headers: auth, body, connections: 1 })
   const health = await run(`${url}/api/health`, 'health')
   await run(`${url}/api/sketches`, 'sketch-list', { headers: auth })
   const analysis = await run(`${url}/api/analysis`, 'analysis-1000-vertices', { method: 'POST', headers: auth, body })
@@ -52,10 +73,7 @@ try {
   const during = await run(`${url}/api/health`, 'health-during-4-heavy-analyses', { connections: 1, duration: Math.max(1, DURATION - 2) })
   const heavyResult = await busy
   console.log(`heavy-analyses req_per_s=${heavyResult.requests.average.toFixed(1)} p50_ms=${heavyResult.latency.p50} non2xx=${heavyResult.non2xx}`)
-  console.log(`summary analysis_4_clients_req_per_s=${four.requests.average.toFixed(0)} health_p99_during_heavy_ms=${during.latency.p99}`)
+  console.log(`summary analysis_1_client_req_per_s=${one.requests.average.toFixed(0)} analysis_4_clients_req_per_s=${four.requests.average.toFixed(0)} four_over_one=${(four.requests.average / one.requests.average).toFixed(2)} health_p99_during_heavy_ms=${during.latency.p99}`)
   const ratio = health.latency.p50 > 0 ? analysis.latency.p50 / health.latency.p50 : NaN
   console.log(`analysis-vs-health p50_ratio=${Number.isFinite(ratio) ? ratio.toFixed(2) : 'n/a'} (a 1 000-vertex analysis costs this many health checks)`)
-} finally {
-  child.kill('SIGTERM')
-  rmSync(dir, { recursive: true, force: true })
 }

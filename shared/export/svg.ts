@@ -92,7 +92,7 @@ export function exportSvg(a: Answer, title: string, system: Units, width = 1200,
     ? `<text x="${legendX}" y="${pad + 10}">Overturning: no equilibrium</text><text x="${legendX}" y="${pad + 30}">without tension</text>`
     : lifted && st
       ? `<defs><linearGradient id="lg" x1="0" y1="1" x2="0" y2="0"><stop offset="0" stop-color="${EXPORT_COLOURS.compression}"/><stop offset="1" stop-color="${EXPORT_COLOURS.zero}"/></linearGradient></defs>
-<text x="${legendX}" y="${pad - 12}">Contact pressure (no tension)</text>
+<text x="${legendX}" y="${pad - 30}">Contact pressure</text><text x="${legendX}" y="${pad - 12}">(no tension)</text>
 <rect x="${legendX}" y="${pad}" width="24" height="240" fill="url(#lg)" stroke="#555"/>
 <text x="${legendX + 32}" y="${pad + 10}">0</text><text x="${legendX + 32}" y="${pad + 240}">${fmt(-peak)}</text>
 <text x="${legendX}" y="${pad + 270}">peak ${fmt(-peak)}</text><text x="${legendX}" y="${pad + 290}">contact ${formatNumber(100 * (contact!.area ?? 0) / a.properties.area, 3)} % of the base</text>`
