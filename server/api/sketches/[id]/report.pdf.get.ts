@@ -77,7 +77,7 @@ function toBytes(raw: unknown): Uint8Array {
 /** The analysis of a sheet: in a pool worker when it is heavy (torsion), else in-line; bad geometry throws a 422. */
 async function analyse(event: Parameters<typeof analyseInPool>[0], input: Parameters<typeof analyseInPool>[1]): Promise<AnalysisOutput> {
   const result = await analyseInPool(event, input, JSON.stringify(input))
-  return 'json' in result ? (JSON.parse(result.json) as AnalysisOutput) : result
+  return 'json' in result ? (JSON.parse(result.json.toString('utf8')) as AnalysisOutput) : result
 }
 
 /** A 422 from the analysis (bad geometry, a section torsion refuses, a solve over its time limit). */
