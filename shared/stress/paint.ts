@@ -1,38 +1,26 @@
 import type { Ring } from '../geometry/types'
 import type { FieldGradient } from './field'
+import type { CanvasPalette } from '../canvas/palette'
+import type { Box } from '../canvas/labels'
+import { paintLabels, type Paint2D, type PlacedLabel, type SceneLabel } from '../canvas/paint-labels'
 
-/**
- * The 2D drawing calls the stress overlay makes: a browser canvas context and Konva's context
- * wrapper (what a Konva sceneFunc receives) both provide them.
- */
-export type Paint2D = Pick<CanvasRenderingContext2D, 'arc' | 'beginPath' | 'clip' | 'closePath' | 'createLinearGradient' | 'fill' | 'fillStyle' | 'fillText' | 'font' | 'lineJoin' | 'lineTo' | 'lineWidth' | 'moveTo' | 'restore' | 'save' | 'setLineDash' | 'setTransform' | 'stroke' | 'strokeStyle' | 'strokeText' | 'textAlign'>
+export type { Paint2D } from '../canvas/paint-labels'
 
-/** Ink colour of the stress overlay's lines and labels (Tailwind ink-900). */
-export const STRESS_INK = '#161b23'
-
-/** A label at a model point (mm) moved by (dx, dy) screen px (y down), upright at a fixed size. */
-export interface SceneLabel {
-  x: number
-  y: number
-  text: string
-  dx: number
-  dy: number
-  colour?: string
-  weight?: 'normal' | 'bold' | 'italic'
-  size?: number
-  align?: CanvasTextAlign
-}
+export type { LabelTone, PlacedLabel, SceneLabel } from '../canvas/paint-labels'
 
 /** A marker at a model point: radius in px, optional fill, stroke and dash (px). */
 export interface SceneDot {
   x: number
   y: number
   r: number
-  fill?: string
-  stroke?: string
+  fill?: DotTone
+  stroke?: DotTone
   width?: number
   dash?: number[]
 }
+
+/** Palette roles of a marker's fill and stroke; 'compression' and 'tension' are the field's ends. */
+export type DotTone = 'compression' | 'compressionLight' | 'tension' | 'halo' | 'resultantIn' | 'resultantOut' | 'loadFill' | 'loadStroke'
 
 /**
  * Everything the stress overlay draws in one frame, in model coordinates (mm). Painted by one Konva
@@ -52,11 +40,13 @@ export interface StressScene {
   cut: readonly number[] | null
   dots: SceneDot[]
   labels: SceneLabel[]
+  /** Screen boxes (CSS px) no label may cover: the legend, the dimension lines. */
+  keepOut: Box[]
 }
 
 /** An empty scene. */
 export function emptyScene(): StressScene {
-  return { fields: [], envelope: [], outlines: [], iso: [], core: null, coreDots: [], neutral: null, guides: [], cut: null, dots: [], labels: [] }
+  return { fields: [], envelope: [], outlines: [], iso: [], core: null, coreDots: [], neutral: null, guides: [], cut: null, dots: [], labels: [], keepOut: [] }
 }
 
 /** The world→screen affine map [a, b, c, d, e, f] of Konva (sx = a·x + c·y + e, sy = b·x + d·y + f). */
@@ -108,11 +98,19 @@ function segments(ctx: Paint2D, m: Matrix, segs: readonly number[]): void {
   }
 }
 
+function dotColour(t: DotTone, pal: CanvasPalette): string {
+  if (t === 'compression' || t === 'compressionLight' || t === 'tension') return pal.field[t]
+  return pal[t]
+}
+
 /**
  * Paints a scene on a native 2D context whose transform is the device pixel ratio only, mapping
  * model points with the stage matrix `m`: lines keep their pixel width and text stays upright.
+ * Colours come from `pal`. Labels are placed by placeLabels inside `area` (the canvas, CSS px),
+ * clear of each other, the scene's keep-out boxes and the markers; a label moved away from its
+ * point gets a thin leader line. Returns the labels as painted.
  */
-export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
+export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene, pal: CanvasPalette, area: Box): PlacedLabel[] {
   const [a, b, c, d, e, f] = m as [number, number, number, number, number, number]
   const X = (x: number, y: number) => a * x + c * y + e
   const Y = (x: number, y: number) => b * x + d * y + f
@@ -135,7 +133,7 @@ export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
     ctx.fillStyle = env.base
     ctx.fill(p, 'evenodd')
     ctx.clip(p, 'evenodd')
-    ctx.strokeStyle = 'rgba(22,27,35,0.35)'
+    ctx.strokeStyle = pal.bandEdge
     ctx.lineWidth = 0.75
     for (const band of env.bands) {
       ctx.beginPath()
@@ -146,22 +144,22 @@ export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
     }
     ctx.restore()
   }
-  ctx.strokeStyle = STRESS_INK
+  ctx.strokeStyle = pal.ink
   ctx.lineWidth = 1
   for (const rings of s.outlines) ctx.stroke(cachedPath(m, rings))
   if (s.iso.length) {
     ctx.beginPath()
     segments(ctx, m, s.iso)
-    ctx.strokeStyle = 'rgba(22,27,35,0.55)'
+    ctx.strokeStyle = pal.isoline
     ctx.setLineDash([5, 3])
     ctx.stroke()
     ctx.setLineDash([])
   }
   if (s.core) {
     const p = cachedPath(m, [s.core], s.core)
-    ctx.fillStyle = 'rgba(31, 158, 126, 0.16)'
+    ctx.fillStyle = pal.coreFill
     ctx.fill(p)
-    ctx.strokeStyle = '#116652'
+    ctx.strokeStyle = pal.core
     ctx.lineWidth = 1.5
     ctx.stroke(p)
     ctx.beginPath()
@@ -171,13 +169,13 @@ export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
       ctx.moveTo(x + 3, y)
       ctx.arc(x, y, 3, 0, 2 * Math.PI)
     }
-    ctx.fillStyle = '#116652'
+    ctx.fillStyle = pal.core
     ctx.fill()
   }
   if (s.guides.length) {
     ctx.beginPath()
     segments(ctx, m, s.guides)
-    ctx.strokeStyle = '#7c899b'
+    ctx.strokeStyle = pal.helper
     ctx.lineWidth = 1
     ctx.setLineDash([2, 4])
     ctx.stroke()
@@ -186,7 +184,7 @@ export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
   if (s.neutral) {
     ctx.beginPath()
     segments(ctx, m, s.neutral)
-    ctx.strokeStyle = STRESS_INK
+    ctx.strokeStyle = pal.ink
     ctx.lineWidth = 2
     ctx.setLineDash([10, 5])
     ctx.stroke()
@@ -195,34 +193,28 @@ export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
   if (s.cut) {
     ctx.beginPath()
     segments(ctx, m, s.cut)
-    ctx.strokeStyle = '#c8323a'
+    ctx.strokeStyle = pal.resultantOut
     ctx.lineWidth = 2
     ctx.stroke()
   }
+  const keepOut: Box[] = [...s.keepOut]
   for (const dot of s.dots) {
+    const x = X(dot.x, dot.y)
+    const y = Y(dot.x, dot.y)
+    keepOut.push({ x: x - dot.r, y: y - dot.r, w: 2 * dot.r, h: 2 * dot.r })
     ctx.beginPath()
-    ctx.arc(X(dot.x, dot.y), Y(dot.x, dot.y), dot.r, 0, 2 * Math.PI)
+    ctx.arc(x, y, dot.r, 0, 2 * Math.PI)
     if (dot.fill) {
-      ctx.fillStyle = dot.fill
+      ctx.fillStyle = dotColour(dot.fill, pal)
       ctx.fill()
     }
     if (dot.stroke) {
-      ctx.strokeStyle = dot.stroke
+      ctx.strokeStyle = dotColour(dot.stroke, pal)
       ctx.lineWidth = dot.width ?? 1.5
       ctx.setLineDash(dot.dash ?? [])
       ctx.stroke()
       ctx.setLineDash([])
     }
   }
-  ctx.lineWidth = 3
-  ctx.strokeStyle = '#ffffff'
-  for (const l of s.labels) {
-    ctx.font = `${l.weight === 'bold' ? '600 ' : l.weight === 'italic' ? 'italic ' : ''}${l.size ?? 11}px "IBM Plex Sans", sans-serif`
-    ctx.textAlign = l.align ?? 'left'
-    const x = X(l.x, l.y) + l.dx
-    const y = Y(l.x, l.y) + l.dy
-    ctx.strokeText(l.text, x, y)
-    ctx.fillStyle = l.colour ?? STRESS_INK
-    ctx.fillText(l.text, x, y)
-  }
+  return paintLabels(ctx, s.labels, X, Y, pal, area, keepOut)
 }

@@ -89,10 +89,10 @@ export interface StressScale {
  * The diverging scale (d3-scale, linear in sRGB between five stops) over [−limit, +limit] MPa:
  * compression → light compression → neutral (0) → light tension → tension. Symmetric so zero is
  * always the neutral colour; values beyond the limit clamp. A zero or invalid limit becomes 1 MPa.
+ * `c` is the ramp: the light one by default, the dark canvas passes its own (shared/canvas/palette).
  */
-export function stressScale(limitMPa: number): StressScale {
+export function stressScale(limitMPa: number, c: Readonly<Record<keyof typeof STRESS_COLOURS, string>> = STRESS_COLOURS): StressScale {
   const limit = Number.isFinite(limitMPa) && limitMPa > 0 ? limitMPa : 1
-  const c = STRESS_COLOURS
   const s = scaleLinear<string>()
     .domain([-limit, -limit / 2, 0, limit / 2, limit])
     .range([c.compression, c.compressionLight, c.neutral, c.tensionLight, c.tension])
