@@ -10,6 +10,8 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error'
  */
 export function useAutosave(delayMs = 800) {
   const sketch = useSketchStore()
+  // A reader (view or comment share) explores without saving.
+  const access = useAccessStore()
   const status = ref<SaveStatus>('saved')
   const message = ref<string | null>(null)
   const savedRevision = ref(sketch.revision)
@@ -37,7 +39,7 @@ export function useAutosave(delayMs = 800) {
 
   /** Saves one snapshot after any save under way (one PATCH at a time, each with the version the last one got). */
   async function send(snap: ReturnType<typeof snapshot>): Promise<void> {
-    if (!snap.mine || !target.id) return
+    if (!snap.mine || !target.id || !access.canEdit) return
     while (saving) await saving
     if (status.value === 'conflict') return
     status.value = 'saving'
@@ -64,7 +66,7 @@ export function useAutosave(delayMs = 800) {
   }
 
   function schedule(): void {
-    if (status.value === 'conflict') return
+    if (status.value === 'conflict' || !access.canEdit) return
     status.value = dirty.value ? 'unsaved' : 'saved'
     if (timer) clearTimeout(timer)
     if (dirty.value) timer = setTimeout(() => { timer = null; void save() }, delayMs)
@@ -108,7 +110,7 @@ export function useAutosave(delayMs = 800) {
   watch(() => [sketch.revision, sketch.meta?.title], schedule)
 
   function beforeUnload(e: BeforeUnloadEvent): void {
-    if (dirty.value) e.preventDefault()
+    if (dirty.value && access.canEdit) e.preventDefault()
   }
   onMounted(() => window.addEventListener('beforeunload', beforeUnload))
   onBeforeUnmount(() => {
