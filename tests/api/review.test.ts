@@ -67,6 +67,24 @@ describe('check and approval', () => {
     expect(edited.status).toBe(200)
     expect(edited.body).toMatchObject({ status: 'draft', approvedBy: null, approvedRevision: { number: 1, approvedBy: 'Cai Checker' } })
     const rev = await owner.get(`/api/sketches/${id}/revisions/1`)
+    expect(rev.body.status).toBe('approved')
+  })
+
+  it('a rename, or a save of the same drawing, keeps an approved sketch approved', async () => {
+    const id = await withRevision('Renamed after approval')
+    await submit(id)
+    await checker.post(`/api/sketches/${id}/review/approve`)
+    const renamed = await owner.patch(`/api/sketches/${id}`, { version: 1, title: 'Renamed, same drawing', document: plateDoc() })
+    expect(renamed.status).toBe(200)
+    expect(renamed.body).toMatchObject({ status: 'approved', approvedBy: 'Cai Checker' })
+  })
+
+  it('the approved revision keeps its document after a later edit', async () => {
+    const id = await withRevision('Edited twice after approval')
+    await submit(id)
+    await checker.post(`/api/sketches/${id}/review/approve`)
+    await owner.patch(`/api/sketches/${id}`, { version: 1, document: plateDoc(500, 30) })
+    const rev = await owner.get(`/api/sketches/${id}/revisions/1`)
     expect(rev.body).toMatchObject({ status: 'approved', approvedBy: 'Cai Checker' })
     expect(rev.body.document.parts[0].outline).toEqual(plateDoc().parts[0]!.outline)
   })

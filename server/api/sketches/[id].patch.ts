@@ -5,8 +5,8 @@ import { UpdateSketchBody } from '../../../shared/sketch/api'
 /**
  * Saves changes to a sketch I may edit (owner, admin, or an edit share). The body carries the
  * `version` it edited; when the sketch was saved elsewhere since, the answer is 409 and nothing
- * changes (no lost update). Changing an approved sketch starts a new working state: its status
- * goes back to draft, while the approved revision stays approved.
+ * changes (no lost update). A new drawing of an approved sketch (not a rename) starts a new working
+ * state whose status is draft again, while the approved revision stays approved.
  */
 export default defineEventHandler(async (event) => {
   const { id } = await paramsAs(event, IdParams)
@@ -17,8 +17,10 @@ export default defineEventHandler(async (event) => {
   if (body.project !== undefined) changes.project = body.project
   if (body.description !== undefined) changes.description = body.description
   if (body.document !== undefined) changes.document = JSON.stringify(body.document)
-  const changed = Object.keys(changes).length > 0
-  if (changed && sketch.status === 'approved') changes.status = 'draft'
+  const current: Record<string, unknown> = { title: sketch.title, project: sketch.project, description: sketch.description, document: sketch.document }
+  const changed = Object.entries(changes).some(([key, value]) => current[key] !== value)
+  // The approval is of the section: a new drawing (not a rename) makes the working state a draft again.
+  if (changes.document !== undefined && changes.document !== sketch.document && sketch.status === 'approved') changes.status = 'draft'
   const db = await useDb()
   // Compare-and-set on the version in one statement, so two saves cannot both win.
   const [count] = await db.Sketch.update(
