@@ -103,6 +103,11 @@ test('engineer shares and submits; the checker pins a comment and returns it; th
   await openTeam(engineer, 'revisions')
   await expect(engineer.getByTestId('revision-row').first()).toContainText('Approved by Cora Vint')
   await shot(engineer, 'team-5-engineer-approved')
+  // Compare the two revisions: outlines over each other and the property table (the same plate: no change).
+  for (const row of await engineer.getByTestId('revision-row').all()) await row.getByRole('checkbox').check()
+  await engineer.getByTestId('revision-compare').click()
+  await expect(engineer.getByTestId('compare-table').locator('tr[data-key="area"]')).toContainText('6000')
+  await shot(engineer, 'team-5b-compare')
 
   // A read-only link, opened by someone who is not signed in.
   await openTeam(engineer, 'share')
