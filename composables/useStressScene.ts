@@ -1,9 +1,9 @@
 import { ringsBounds } from '#shared/geometry/bounds'
 import type { Bounds } from '#shared/geometry/types'
-import { pointInRing } from '#shared/editor/hit'
+import { pointInRing } from '#shared/geometry/ring'
 import { envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient } from '#shared/stress/field'
 import { formatNumber, formatStress, STRESS_COLOURS } from '#shared/stress/scale'
-import { emptyScene, type StressScene } from './useStressPaint'
+import { emptyScene, STRESS_INK, type StressScene } from '#shared/stress/paint'
 
 const EMPTY_BOX: Bounds = { minX: 0, minY: 0, maxX: 0, maxY: 0 }
 
@@ -13,14 +13,14 @@ const EMPTY_BOX: Bounds = { minX: 0, minY: 0, maxX: 0, maxY: 0 }
  * resultant, load labels, snap guides and the cut line. Pure data: StressFieldLayer paints it.
  */
 export function useStressScene(zoom: () => number, viewBox: () => Bounds | null) {
-  const view = useStressView()
+  const view = useStressViewStore()
   return computed<StressScene>(() => {
     const s = emptyScene()
-    const f = view.frame.value
-    const sec = view.section.value
+    const f = view.frame
+    const sec = view.section
     if (!sec) return s
-    const u = view.units.value
-    const scale = view.scale.value
+    const u = view.units
+    const scale = view.scale
     const regions = sec.regions
     const plane = f.planes[0]
     const contact = f.kind === 'contact'
@@ -52,7 +52,7 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
       const lo = f.min.value
       const hi = f.max?.value ?? 0
       const thresholds = [lo, ...isolineValues(lo, hi, 8, u.stress.perMPa), 0].filter((v, i, a) => a.indexOf(v) === i && v >= lo && v <= hi).sort((p, q) => p - q)
-      const worstC = f.clampAbove === 0 || view.envelopeSide.value === 'compression'
+      const worstC = f.clampAbove === 0 || view.envelopeSide === 'compression'
       for (const r of regions) {
         // Even-odd over the region's rings: inside its material, not in a void.
         const inMaterial = (x: number, y: number) => r.rings.reduce((odd, ring) => (pointInRing([x, y], ring) ? !odd : odd), false)
@@ -112,7 +112,7 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
       const text = t ? `max T ${formatStress(f.max.value, u).replace(/ T$/, '')}` : `least C ${formatStress(f.max.value, u).replace(/ C$/, '')}`
       s.labels.push({ x: f.max.x, y: f.max.y, text, dx: 8, dy: -8, weight: 'bold' })
     }
-    if (f.kind === 'plane' && f.onset && (!f.inKern || view.drag.value)) {
+    if (f.kind === 'plane' && f.onset && (!f.inKern || view.drag)) {
       const o = f.onset
       s.dots.push({ x: o.x, y: o.y, r: 9, stroke: STRESS_COLOURS.tension, width: 2, dash: [3, 2] })
       s.labels.push({ x: o.x, y: o.y, text: o.startsInTension ? 'tension starts here' : 'tension would start here', dx: 12, dy: 26, size: 10, colour: '#8a5a00' })
@@ -125,16 +125,18 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
       s.dots.push({ x: r.x, y: r.y, r: 11, stroke: colour, width: 2.5 })
       s.labels.push({ x: r.x, y: r.y, text: f.inKern ? 'resultant in core' : 'resultant outside core', dx: 14, dy: -10, colour, weight: 'bold' })
     }
-    for (const l of view.loads.value) s.labels.push({ x: l.x, y: l.y, text: `${l.name} · ${formatNumber(l.P * u.force.perN)} ${u.force.label}`, dx: 11, dy: 16 })
-    const d = view.drag.value
+    // The load handles: picked by the canvas's one input path (a hit test in mm), drawn here with the field.
+    for (const l of view.loads) s.dots.push({ x: l.x, y: l.y, r: 7, fill: STRESS_INK, stroke: '#ffffff', width: 2 })
+    for (const l of view.loads) s.labels.push({ x: l.x, y: l.y, text: `${l.name} · ${formatNumber(l.P * u.force.perN)} ${u.force.label}`, dx: 11, dy: 16 })
+    const d = view.drag
     if (d) {
       const b = sec.props.bounds
       const L = Math.hypot(b.maxX - b.minX, b.maxY - b.minY)
       const th = (sec.props.theta * Math.PI) / 180
       for (const [ux, uy] of [[Math.cos(th), Math.sin(th)], [-Math.sin(th), Math.cos(th)]] as const) s.guides.push(c.x - L * ux, c.y - L * uy, c.x + L * ux, c.y + L * uy)
-      if (view.snap.value) s.labels.push({ x: d.x, y: d.y, text: `snap: ${view.snap.value}`, dx: 11, dy: 30, size: 10, colour: '#116652' })
+      if (view.snap) s.labels.push({ x: d.x, y: d.y, text: `snap: ${view.snap}`, dx: 11, dy: 30, size: 10, colour: '#116652' })
     }
-    const cut = view.cut.value
+    const cut = view.cut
     if (cut) {
       s.cut = [...cut.p0, ...cut.p1]
       s.labels.push({ x: cut.p0[0], y: cut.p0[1], text: 'A', dx: -14, dy: 4, colour: '#95222a', weight: 'bold' })

@@ -259,7 +259,7 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
   expect(Math.abs(q.x - p.x) + Math.abs(q.y - p.y)).toBeLessThan(0.5)
 })
 
-test('a dragged vertex waits for its analysis: drawing and properties change in one frame, and a slow answer does not hold the edit', async ({ page }) => {
+test('a dragged vertex waits for its analysis: drawing and properties change together, and a slow answer does not hold the edit', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
   await page.getByTestId('new-sketch').click()
   await page.waitForSelector('[data-testid="sketch-canvas"] canvas')
@@ -268,33 +268,36 @@ test('a dragged vertex waits for its analysis: drawing and properties change in 
   await dragMouse(page, at(-100, -50), at(100, 50))
   await expectArea(page, 200 * 100)
 
-  // A prompt answer: record, per animation frame, when the vertex table and the area change.
+  // A prompt answer: record every state the page shows (after each DOM update) of the vertex
+  // table, the drawn parts' revision and the area.
   at = await canvasTransform(page)
   await page.mouse.click(at(0, 0).x, at(0, 0).y)
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('100')
-  // Sample both in every animation frame, as it is about to be painted.
   await page.evaluate(() => {
-    const w = window as unknown as { kwSeen: Record<string, number> }
-    const x = () => (document.querySelector('[data-testid="vertex-2-x"]') as HTMLInputElement | null)?.value
-    const area = () => document.querySelector('[data-testid="prop-area"]')?.getAttribute('data-value')
-    const x0 = x()
-    const a0 = area()
-    let frame = 0
-    w.kwSeen = {}
-    const tick = () => {
-      frame++
-      if (!('x' in w.kwSeen) && x() !== x0) w.kwSeen.x = frame
-      if (!('area' in w.kwSeen) && area() !== a0) w.kwSeen.area = frame
-      requestAnimationFrame(tick)
-    }
-    requestAnimationFrame(tick)
+    const w = window as unknown as { kwStates: string[][] }
+    const read = () => [
+      (document.querySelector('[data-testid="vertex-2-x"]') as HTMLInputElement | null)?.value ?? '',
+      document.querySelector('[data-testid="sketch-canvas"]')?.getAttribute('data-parts-revision') ?? '',
+      document.querySelector('[data-testid="prop-area"]')?.getAttribute('data-value') ?? '',
+    ]
+    w.kwStates = [read()]
+    new MutationObserver(() => {
+      const now = read()
+      if (now.join('|') !== w.kwStates.at(-1)!.join('|')) w.kwStates.push(now)
+    }).observe(document.body, { subtree: true, childList: true, attributes: true, characterData: true })
   })
   await dragMouse(page, at(100, 50), at(140, 50))
   await expect(page.getByTestId('vertex-2-x')).toHaveValue('140')
   await expectArea(page, shoelace(await readVertices(page)))
-  const seen = await page.evaluate(() => (window as unknown as { kwSeen: Record<string, number> }).kwSeen)
-  expect(seen.x).toBeGreaterThan(0)
-  expect(seen.area, 'the area and the moved vertex change in the same frame').toBe(seen.x)
+  const states = await page.evaluate(() => (window as unknown as { kwStates: string[][] }).kwStates)
+  const [x0, rev0, area0] = states[0]!
+  const last = states.at(-1)!
+  expect(last[0]).toBe('140')
+  expect(last[1]).not.toBe(rev0)
+  expect(last[2]).not.toBe(area0)
+  // No state on screen shows the moved vertex (in the table or the drawing) with the old area.
+  const torn = states.filter(([x, rev, area]) => (x !== x0 || rev !== rev0) && area === area0)
+  expect(torn, 'the moved vertex and its area appear together').toEqual([])
 
   // A slow answer (3 s): the edit is committed anyway within the hold (120 ms), the panel says
   // the numbers are pending, and they follow when the answer comes.

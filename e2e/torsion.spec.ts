@@ -45,3 +45,34 @@ test('the torsion panel shows J, Cw, the shear centre of a channel where the clo
   await expect(page.getByTestId('torsion-status')).not.toContainText('solving')
   await shot(page, 'torsion-channel')
 })
+
+test('a box of four welded plates: the closed-cell welds show |q| from the FE shear solution, Vy·Q/Ixx of half a flange (thin-walled result, the symmetry cut has q = 0)', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  const plate = (id: string, name: string, x: number, y: number, w: number, hh: number) => ({ id, name, outline: [[x, y], [x + w, y], [x + w, y + hh], [x, y + hh]], holes: [], shape: null, material: { name: 'Steel', E: 200_000, fy: 355, density: 7850 } })
+  const document = {
+    schema: 'kernwise.sketch/2',
+    parts: [plate('t', 'Top flange', -100, 140, 200, 10), plate('r', 'Right web', 90, -140, 10, 280), plate('b', 'Bottom flange', -100, -150, 200, 10), plate('l', 'Left web', -100, -140, 10, 280)],
+    cases: [{ id: 'case-1', name: 'Dead', Mx: 0, My: 0 }],
+    combinations: [],
+    loads: [],
+    settings: { shear: { Vx: 0, Vy: 100_000 } },
+  }
+  const res = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Welded box', document } })
+  expect(res.status()).toBe(201)
+  await open(page, `/sketches/${(await res.json()).id}`)
+  await expect(page.getByTestId('torsion-panel')).toHaveAttribute('data-state', 'ready', { timeout: 20_000 })
+  const rows = page.getByTestId('shear-row')
+  await expect(rows).toHaveCount(4)
+  await expect(rows.first()).toHaveAttribute('data-source', 'fe')
+  // Parallel axes by hand; Q of half a flange = 100·10·145 mm³.
+  const Ixx = 2 * (200 * 10 ** 3 / 12 + 2000 * 145 ** 2) + 2 * (10 * 280 ** 3 / 12)
+  const expected = (100_000 * 100 * 10 * 145) / Ixx
+  for (let i = 0; i < 4; i++) {
+    await expect(rows.nth(i)).toHaveAttribute('data-status', 'closed-cell')
+    await expect(page.getByTestId(`shear-source-${i}`)).toContainText('from the FE shear solution')
+    const q = Number(await page.getByTestId(`shear-q-${i}`).getAttribute('data-value'))
+    expect(Math.abs(q - expected) / expected).toBeLessThan(0.01)
+  }
+  await page.getByTestId('shear-panel').scrollIntoViewIfNeeded()
+  await shot(page, 'shear-closed-cell-fe')
+})

@@ -48,8 +48,8 @@ export function freePort() {
 }
 
 /** Starts the built server; resolves once /api/health answers ok. */
-export async function startServer(env, { quiet = true } = {}) {
-  const child = spawn(process.execPath, [join(root, '.output/server/index.mjs')], {
+export async function startServer(env, { quiet = true, nodeArgs = [] } = {}) {
+  const child = spawn(process.execPath, [...nodeArgs, join(root, '.output/server/index.mjs')], {
     cwd: root,
     env: { ...process.env, HOST: '127.0.0.1', ...env },
     stdio: quiet ? ['ignore', 'ignore', 'inherit'] : 'inherit',

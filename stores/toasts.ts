@@ -1,4 +1,6 @@
 import { defineStore } from 'pinia'
+import { ref } from 'vue'
+import { errorMessage } from '#shared/utils/errors'
 
 export interface Toast {
   id: number
@@ -24,3 +26,13 @@ export const useToastStore = defineStore('toasts', () => {
 
   return { toasts, push, dismiss }
 })
+
+/** Runs a request and shows its error as a toast; returns null on failure. */
+export async function withToast<T>(request: () => Promise<T>): Promise<T | null> {
+  try {
+    return await request()
+  } catch (error) {
+    useToastStore().push('error', errorMessage(error))
+    return null
+  }
+}

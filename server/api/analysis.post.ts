@@ -1,3 +1,4 @@
+import type { H3Event } from 'h3'
 import { analysisAnswer, NOT_FINITE_MESSAGE, requestVertices } from '../../shared/analysis/answer'
 import { AnalysisRequest } from '../../shared/analysis/contract'
 import { MAX_VERTICES } from '../../shared/sketch/document'
@@ -5,28 +6,32 @@ import { MAX_VERTICES } from '../../shared/sketch/document'
 /**
  * Section analysis (mm, N, MPa; P > 0 compression, stresses tension-positive): properties, core,
  * stress, no-tension contact, shear flow, slenderness, torsion when asked. Bad geometry answers 422
- * naming the part and vertex; the answer never holds NaN or Infinity. A large body is read,
- * checked and analysed in a worker thread (the same checks and messages), off the event loop.
+ * naming the part and vertex; the answer never holds NaN or Infinity. While other analyses are in
+ * progress, and for any large body, the body is read, checked, analysed and encoded in a worker
+ * thread (the same checks and messages), off the event loop; a lone small analysis runs here,
+ * as does everything without the worker bundle (nuxt dev).
  */
-export default defineEventHandler(async (event) => {
+export default defineEventHandler(event => countedAnalysis(event, () => analyse(event)))
+
+async function analyse(event: H3Event) {
   const t0 = performance.now()
   await requireRole(event, 'analyse')
   const timing = () => setResponseHeader(event, 'Server-Timing', `analysis;dur=${(performance.now() - t0).toFixed(2)}`)
-  const text = (await readRawBody(event, 'utf8')) ?? ''
-  if (text.length > WORKER_BODY_BYTES) {
-    const answered = await analyseTextInPool(event, text)
+  const raw = (await readRawBody(event, false)) ?? Buffer.alloc(0)
+  if (raw.byteLength > WORKER_BODY_BYTES || !aloneInFlight(event)) {
+    const answered = await analyseBodyInPool(event, raw)
     if (answered) {
       timing()
       setResponseHeader(event, 'Content-Type', 'application/json')
       return answered.json
     }
   }
+  const text = raw.toString('utf8')
   const body = await readBodyAs(event, AnalysisRequest)
   const vertices = requestVertices(body)
   if (vertices > MAX_VERTICES) {
     throw createError({ statusCode: 413, message: `The section has ${vertices} vertices; the limit is ${MAX_VERTICES}. Use a coarser chord tolerance for arcs.` })
   }
-  // Torsion goes to a worker with the body's text and comes back as the answer's text.
   const result = await analyseInPool(event, body, text)
   if ('json' in result) {
     timing()
@@ -39,4 +44,4 @@ export default defineEventHandler(async (event) => {
   // Sign-in, parse, checks and the analysis (not the JSON encoding of the answer), for clients' timing.
   timing()
   return answer
-})
+}

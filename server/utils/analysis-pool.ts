@@ -10,9 +10,9 @@ import type { AnalysisJob, AnalysisReply } from '../workers/analysis.worker'
 type Input = Parameters<typeof analyseSection>[0]
 type Output = ReturnType<typeof analyseSection>
 
-/** A worker's answer: the finished answer as JSON text (finite-checked, `omit` applied). */
+/** A worker's answer: the finished answer as UTF-8 JSON (finite-checked, `omit` applied), ready to send. */
 export interface WorkerAnswer {
-  json: string
+  json: Buffer
 }
 
 interface Pending {
@@ -31,8 +31,11 @@ interface Slot {
 /**
  * Pool settings (runtime config, NUXT_ANALYSIS_*): workers (default: the core count), queue
  * length, per-account limit, time limit (ms), and the section size (vertices) up to which an
- * analysis runs in-line (negative: never). Measured (npm run bench:load): a 1 000-vertex analysis
- * costs about 1 ms, less than handing it to a thread and back, so small ones stay in-line.
+ * analysis may run in-line (negative: never). Measured (npm run bench:load, --cpu-prof): for a
+ * 1 000-vertex analysis the event loop spent as long on JSON.parse, the body checks and
+ * JSON.stringify of the answer as on the analysis itself, so under concurrent load every analysis
+ * goes to a worker as bytes and comes back as bytes (`analyseBodyInPool`); a lone small one stays
+ * in-line (`aloneInFlight`), where the thread hop would only add to its latency.
  */
 function settings() {
   const c = useRuntimeConfig().analysis as Record<string, unknown> | undefined
@@ -52,6 +55,38 @@ const slots: Slot[] = []
 const queue: Pending[] = []
 const perAccount = new Map<string, number>()
 let nextId = 1
+/** Analysis requests between the start of their handler and their answer (reading the body included). */
+let requestsInFlight = 0
+/** The connections of the last few analysis requests and when they started (ms, performance.now()). */
+const recentStarts: { socket: unknown; at: number }[] = []
+/** Another connection's analysis this recent (ms) means analyses arrive concurrently. */
+const CONCURRENT_MS = 50
+
+/** Runs an analysis request's handler, counted in `requestsInFlight` and `recentStarts` while it runs. */
+export async function countedAnalysis<T>(event: H3Event, handle: () => Promise<T>): Promise<T> {
+  requestsInFlight++
+  recentStarts.push({ socket: event.node.req.socket, at: performance.now() })
+  if (recentStarts.length > 8) recentStarts.shift()
+  try {
+    return await handle()
+  } finally {
+    requestsInFlight--
+  }
+}
+
+/**
+ * True when this is the only analysis request in progress, no other connection asked for one in
+ * the last CONCURRENT_MS, and the pool is idle (and in-line runs are allowed): a small analysis
+ * may then run on the event loop, as nothing waits behind it and a thread hop would only add to
+ * its latency. Several clients at once go to the workers.
+ */
+export function aloneInFlight(event: H3Event): boolean {
+  config ??= settings()
+  if (config.inlineVertices < 0 || requestsInFlight > 1 || queue.length > 0 || slots.some(s => s.busy)) return false
+  const now = performance.now()
+  const socket = event.node.req.socket
+  return !recentStarts.some(r => r.socket !== socket && now - r.at < CONCURRENT_MS)
+}
 
 /** The bundled worker beside the built server (.output/server/workers/analysis.mjs), or null (development: run in-line). */
 function findWorkerFile(): string | null {
@@ -108,7 +143,7 @@ function finish(slot: Slot, reply: AnalysisReply): void {
   if (slot.timer) clearTimeout(slot.timer)
   slot.busy = null
   release(p)
-  if ('json' in reply) p.resolve({ json: reply.json })
+  if ('json' in reply) p.resolve({ json: Buffer.from(reply.json.buffer, reply.json.byteOffset, reply.json.byteLength) })
   else if ('invalid' in reply) {
     const e = reply.invalid
     p.reject(createError({ statusCode: e.status, statusMessage: e.status === 413 ? 'Payload Too Large' : 'Bad Request', message: e.message, data: e.data }))
@@ -134,7 +169,7 @@ function pump(): void {
       statusMessage: 'Unprocessable Entity',
       message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
     })), config!.timeoutMs)
-    slot.worker.postMessage(p.job)
+    slot.worker.postMessage(p.job, [p.job.body.buffer as ArrayBuffer])
   }
 }
 
@@ -149,8 +184,8 @@ function busy(event: H3Event, message: string): never {
  * one account are in flight and at most `queue` wait for a worker; beyond either the answer is
  * 429 with Retry-After. A geometry error is the same 422 as in-line; an analysis over the time
  * limit is stopped (its worker replaced) and answers 422. A section of at most `inlineVertices`
- * vertices (about 2 ms of work) runs in-line unless it asks for torsion (a finite-element solve),
- * and so does everything without the worker bundle (nuxt dev).
+ * vertices runs in-line unless it asks for torsion (a finite-element solve), and so does
+ * everything without the worker bundle (nuxt dev). `text` is `input` as the JSON a client sent.
  */
 export async function analyseInPool(event: H3Event, input: Input, text: string): Promise<Output | WorkerAnswer> {
   config ??= settings()
@@ -160,24 +195,25 @@ export async function analyseInPool(event: H3Event, input: Input, text: string):
   // Torsion meshes and solves (up to a second or two) whatever the vertex count: always in a worker.
   const heavy = input.torsion === true || vertices > config.inlineVertices
   if (!file || !heavy) return withSectionErrors(() => analyseSection(input))
-  return toWorker(event, file, text)
+  return toWorker(event, file, Buffer.from(text, 'utf8'))
 }
 
-/** A body this large (bytes of JSON) goes to a worker unread: about 2 000 vertices, where the pool starts anyway. */
+/** A body this large (bytes of JSON, about 2 000 vertices, where the pool starts anyway) never runs in-line. */
 export const WORKER_BODY_BYTES = 64 * 1024
 
 /**
- * The analysis of a large request body, read, checked and analysed in a worker (the event loop
- * does not parse it); null when there is no worker (development), so the caller reads it itself.
+ * The analysis of a request body (its raw bytes), read, checked, analysed and encoded in a worker:
+ * the event loop neither parses nor stringifies it. Null when there is no worker (development), so
+ * the caller reads the body itself.
  */
-export async function analyseTextInPool(event: H3Event, text: string): Promise<WorkerAnswer | null> {
+export async function analyseBodyInPool(event: H3Event, body: Uint8Array): Promise<WorkerAnswer | null> {
   config ??= settings()
   const file = findWorkerFile()
   if (!file) return null
-  return toWorker(event, file, text)
+  return toWorker(event, file, body)
 }
 
-function toWorker(event: H3Event, file: string, text: string): Promise<WorkerAnswer> {
+function toWorker(event: H3Event, file: string, body: Uint8Array): Promise<WorkerAnswer> {
   while (slots.length < config!.workers) slots.push(spawn(file))
   const account = String((event.context.kwUser as { id?: string } | undefined)?.id ?? clientAddress(event))
   const mine = perAccount.get(account) ?? 0
@@ -185,7 +221,10 @@ function toWorker(event: H3Event, file: string, text: string): Promise<WorkerAns
   if (queue.length >= config!.queue) busy(event, 'The server is busy with other analyses; try again in 2 s.')
   perAccount.set(account, mine + 1)
   return new Promise<WorkerAnswer>((resolve, reject) => {
-    queue.push({ job: { id: nextId++, text }, account, resolve, reject })
+    // A copy the worker can own (the body may sit in Node's shared buffer pool): moved, not cloned.
+    const bytes = new Uint8Array(body.byteLength)
+    bytes.set(body)
+    queue.push({ job: { id: nextId++, body: bytes }, account, resolve, reject })
     pump()
   })
 }

@@ -1,12 +1,13 @@
 import polygonClipping from 'polygon-clipping'
 import type { Ring } from '../geometry/types'
 import { ringArea } from '../geometry/moments'
-import { orientRing, type XY } from './transform'
+import type { Point } from '../geometry/types'
+import { orientRing } from '../geometry/ring'
 
 /** A polygon for the Booleans: a CCW outline and CW holes (mm). */
 export interface PolygonRings {
-  outline: XY[]
-  holes: XY[][]
+  outline: Point[]
+  holes: Point[][]
 }
 
 type PcRing = [number, number][]
@@ -20,7 +21,7 @@ function fromPc(multi: PcRing[][]): PolygonRings[] {
   return multi.map((poly) => {
     const rings = poly.map((r) => {
       const open = r.slice(0, r.length > 1 && r[0]![0] === r[r.length - 1]![0] && r[0]![1] === r[r.length - 1]![1] ? -1 : undefined)
-      return open.map(q => [q[0], q[1]] as XY)
+      return open.map(q => [q[0], q[1]] as Point)
     })
     return { outline: orientRing(rings[0]!, true), holes: rings.slice(1).map(h => orientRing(h, false)) }
   }).filter(p => Math.abs(ringArea(p.outline)) > 0)

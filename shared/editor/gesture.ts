@@ -1,4 +1,4 @@
-import type { XY } from './transform'
+import type { Point } from '../geometry/types'
 import { hitPart, hitVertex } from './hit'
 import type { SnapCue } from './snap'
 
@@ -8,19 +8,23 @@ import type { SnapCue } from './snap'
  */
 export type Gesture =
   | { kind: 'none' }
-  | { kind: 'pan'; last: XY }
-  | { kind: 'move'; ids: string[]; start: XY; delta: XY; moved: boolean }
-  | { kind: 'vertex'; part: string; ring: number; index: number; prev: XY; next: XY; point: XY; moved: boolean }
-  | { kind: 'rotate'; ids: string[]; centre: XY; start: number; angle: number }
-  | { kind: 'box'; a: XY; b: XY }
-  | { kind: 'round'; centre: XY; r: number; tube: boolean }
-  | { kind: 'outline'; points: XY[]; hover: XY | null }
+  | { kind: 'pan'; last: Point }
+  | { kind: 'move'; ids: string[]; start: Point; delta: Point; moved: boolean }
+  | { kind: 'vertex'; part: string; ring: number; index: number; prev: Point; next: Point; point: Point; moved: boolean }
+  | { kind: 'rotate'; ids: string[]; centre: Point; start: number; angle: number }
+  | { kind: 'box'; a: Point; b: Point }
+  | { kind: 'round'; centre: Point; r: number; tube: boolean }
+  | { kind: 'outline'; points: Point[]; hover: Point | null }
+  /** A load of the stress view dragged to a new point (the view shows it; the store gets it at the end). */
+  | { kind: 'load'; id: string }
+  /** The stress view's cut line being drawn from p0. */
+  | { kind: 'cut'; p0: Point }
 
 /** The snap cue beside the gesture (null when nothing snapped). */
 export type Cue = SnapCue | null
 
 /** Angle (degrees, counter-clockwise from +x) of the vector from `c` to `p`. */
-export function angleDeg(c: XY, p: XY): number {
+export function angleDeg(c: Point, p: Point): number {
   return (Math.atan2(p[1] - c[1], p[0] - c[0]) * 180) / Math.PI
 }
 
@@ -33,8 +37,8 @@ export function roundAngle(deg: number, step: number): number {
 
 /** A new part (mm) that a finished box or round gesture draws, or null when it is degenerate. */
 export interface DraftPart {
-  outline: XY[]
-  holes: { ring: XY[] }[]
+  outline: Point[]
+  holes: { ring: Point[] }[]
   name: string
   shape: { kind: string; params: Record<string, number> } | null
   label: string
@@ -63,7 +67,7 @@ export function draftPart(
     const t = Math.min(tubeWall, g.r * 0.9)
     const geo = g.tube ? build.tube(d, t) : build.circle(d)
     const [cx, cy] = g.centre
-    const move = (r: readonly (readonly [number, number])[]): XY[] => r.map(p => [p[0] + cx, p[1] + cy])
+    const move = (r: readonly (readonly [number, number])[]): Point[] => r.map(p => [p[0] + cx, p[1] + cy])
     return {
       outline: move(geo.outline),
       holes: geo.holes.map(h => ({ ring: move(h) })),
@@ -102,7 +106,7 @@ export type PickHit =
  * Hit-tests a press of the Pick tool (mm, `tol` the capture radius in mm): the rotation handle
  * first, then the vertices of the selected parts, then any part (top-most first).
  */
-export function pickAt(parts: readonly PickPart[], selected: readonly string[], w: XY, tol: number, handle: XY | null, centre: XY | null): PickHit {
+export function pickAt(parts: readonly PickPart[], selected: readonly string[], w: Point, tol: number, handle: Point | null, centre: Point | null): PickHit {
   if (handle && centre && Math.hypot(handle[0] - w[0], handle[1] - w[1]) <= tol) {
     return { kind: 'rotate', gesture: { kind: 'rotate', ids: [...selected], centre, start: angleDeg(centre, w), angle: 0 } }
   }
@@ -110,7 +114,7 @@ export function pickAt(parts: readonly PickPart[], selected: readonly string[], 
   if (v) {
     const part = parts.find(p => p.id === v.part)!
     const ring = v.ring === 0 ? part.outline : part.holes[v.ring - 1]!.ring
-    const at = (i: number): XY => { const q = ring[(i + ring.length) % ring.length]!; return [q[0], q[1]] }
+    const at = (i: number): Point => { const q = ring[(i + ring.length) % ring.length]!; return [q[0], q[1]] }
     return { kind: 'vertex', vertex: v, gesture: { kind: 'vertex', ...v, prev: at(v.index - 1), next: at(v.index + 1), point: at(v.index), moved: false } }
   }
   const id = hitPart(parts, w, tol)

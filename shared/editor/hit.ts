@@ -1,16 +1,5 @@
 import type { Point, Ring } from '../geometry/types'
-
-/** True when `p` lies inside the ring (even-odd rule, mm); points on an edge may go either way. */
-export function pointInRing(p: Point, ring: Ring): boolean {
-  const [x, y] = p
-  let inside = false
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
-    const [xi, yi] = ring[i]!
-    const [xj, yj] = ring[j]!
-    if ((yi > y) !== (yj > y) && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside
-  }
-  return inside
-}
+import { pointInRing } from '../geometry/ring'
 
 /** Squared distance (mm²) from `p` to the segment a–b, and the parameter t in [0, 1] of the nearest point. */
 export function segmentDistance2(p: Point, a: Point, b: Point): { d2: number; t: number } {
@@ -91,4 +80,15 @@ export function hitPart(parts: readonly HitPart[], p: Point, tol: number): strin
     if (pointInRing(p, part.outline) && !part.holes.some(h => pointInRing(p, h.ring))) return part.id
   }
   return hitEdge(parts, p, tol)?.part ?? null
+}
+
+/** The id of the nearest point (a load handle) within `tol` mm of `p`, or null. */
+export function hitPoint(points: readonly { id: string; x: number; y: number }[], p: Point, tol: number): string | null {
+  let best: string | null = null
+  let bestD2 = tol * tol
+  for (const q of points) {
+    const d2 = (q.x - p[0]) ** 2 + (q.y - p[1]) ** 2
+    if (d2 <= bestD2) { bestD2 = d2; best = q.id }
+  }
+  return best
 }

@@ -3,7 +3,8 @@ import type { Point, Ring } from '../geometry/types'
 import { makeHollow } from '../shapes/offset'
 import { overlapArea, subtractPolygons, unionPolygons } from './boolean'
 import { newId } from './ids'
-import { boundsCentre, deleteVertex, insertVertex, mirrorRing, orientRing, ringsBounds, rotateRing, setVertex, translateRing, type XY } from './transform'
+import { boundsCentre, deleteVertex, insertVertex, mirrorRing, ringsBounds, rotateRing, setVertex, translateRing } from './transform'
+import { orientRing } from '../geometry/ring'
 
 /**
  * Pure operations on the parts of a sketch document (mm). Each returns a new array and leaves
@@ -18,13 +19,13 @@ export function ringOf(part: SketchPart, ring: number): Ring {
 }
 
 /** The part with ring `ring` replaced by `points`. */
-export function withRing(part: SketchPart, ring: number, points: XY[]): SketchPart {
+export function withRing(part: SketchPart, ring: number, points: Point[]): SketchPart {
   if (ring === 0) return { ...part, outline: points }
   return { ...part, holes: part.holes.map((h, k) => (k === ring - 1 ? { ...h, ring: points } : h)) }
 }
 
 /** The part with every ring mapped by `f`. */
-export function mapRings(part: SketchPart, f: (r: Ring) => XY[]): SketchPart {
+export function mapRings(part: SketchPart, f: (r: Ring) => Point[]): SketchPart {
   return { ...part, outline: f(part.outline), holes: part.holes.map(h => ({ ...h, ring: f(h.ring) })) }
 }
 
@@ -40,7 +41,7 @@ export function mapSelected(parts: readonly SketchPart[], ids: readonly string[]
 }
 
 /** The centre (mm) of the selection's bounds, the pivot for rotate and mirror. */
-export function selectionCentre(parts: readonly SketchPart[], ids: readonly string[]): XY {
+export function selectionCentre(parts: readonly SketchPart[], ids: readonly string[]): Point {
   const b = partsBounds(parts.filter(p => ids.includes(p.id)))
   return b ? boundsCentre(b) : [0, 0]
 }

@@ -76,11 +76,3 @@ export function snapPoint(p: Point, ctx: SnapContext): { point: [number, number]
   return { point: [p[0], p[1]], cue: { kind: 'none', at: [p[0], p[1]] } }
 }
 
-/** A "nice" step (1, 2 or 5 × 10ⁿ mm) at least `minMm`: grid lines and the scale bar use it. */
-export function niceStep(minMm: number): number {
-  if (!(minMm > 0) || !Number.isFinite(minMm)) return 1
-  const exp = Math.floor(Math.log10(minMm))
-  const base = 10 ** exp
-  for (const m of [1, 2, 5, 10]) if (m * base >= minMm) return Number((m * base).toPrecision(12))
-  return 10 * base
-}

@@ -2,7 +2,7 @@ import polygonClipping from 'polygon-clipping'
 import type { MultiPolygon as ClipMultiPolygon, Polygon as ClipPolygon } from 'polygon-clipping'
 import { SectionError } from '../mechanics/types'
 import { ringArea } from './moments'
-import { orientRing } from './normalise'
+import { orientRing } from './ring'
 import type { Point, Polygon } from './types'
 
 /** The polygon-clipping operations the mechanics use. */

@@ -139,15 +139,6 @@ function removeSpikes(points: readonly Point[], source: readonly number[], same:
   return { points: out, source: src }
 }
 
-/**
- * The ring with the requested orientation: counter-clockwise (positive area, y up) when ccw is
- * true, clockwise otherwise. Returns a new array; the input is not changed.
- */
-export function orientRing(ring: Ring, ccw: boolean): Point[] {
-  const out = ring.slice()
-  if ((ringArea(ring) > 0) !== ccw) out.reverse()
-  return out
-}
 
 /** Whether b is a zero-width spike of a→b→c: the path turns back on itself along one line. */
 function isSpike(a: Point, b: Point, c: Point): boolean {

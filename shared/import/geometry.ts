@@ -3,28 +3,6 @@ import type { Point } from '../geometry/types'
 
 type P = [number, number]
 
-/** Signed area (mm²) of a ring by the shoelace formula: positive when counter-clockwise. */
-export function signedArea(ring: readonly Point[]): number {
-  let s = 0
-  for (let i = 0; i < ring.length; i++) {
-    const a = ring[i]!
-    const b = ring[(i + 1) % ring.length]!
-    s += a[0] * b[1] - b[0] * a[1]
-  }
-  return s / 2
-}
-
-/** True when `p` lies inside `ring` (even-odd rule; a point on the edge may go either way). */
-export function pointInRing(p: Point, ring: readonly Point[]): boolean {
-  let inside = false
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
-    const [xi, yi] = ring[i]!
-    const [xj, yj] = ring[j]!
-    if ((yi > p[1]) !== (yj > p[1]) && p[0] < ((xj - xi) * (p[1] - yi)) / (yj - yi) + xi) inside = !inside
-  }
-  return inside
-}
-
 /**
  * The points of a DXF bulge segment from `a` to `b` (bulge = tan(sweep/4), positive
  * counter-clockwise), excluding `b`, with chords within the tolerance `tol` (same unit as a, b).

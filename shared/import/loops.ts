@@ -1,4 +1,4 @@
-import { signedArea } from './geometry'
+import { ringArea as signedArea } from '../geometry/moments'
 import type { ImportedLoop, SkippedItem } from './types'
 
 type P = [number, number]

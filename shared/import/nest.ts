@@ -1,4 +1,6 @@
-import { cleanRing, pointInRing, signedArea } from './geometry'
+import { cleanRing } from './geometry'
+import { ringArea as signedArea } from '../geometry/moments'
+import { pointInRing } from '../geometry/ring'
 import type { ImportedLoop, ImportedPart, LayerRole, SkippedItem } from './types'
 
 /**

@@ -1,35 +1,17 @@
 import type { AppliedMoments, PointLoad, StressPlane } from '../mechanics/types'
+import type { LoadCase, LoadCombination, SketchLoad, SketchSettings } from '../sketch/document'
 
 /** A load as the sketch document stores it: P in N (compression positive) at (x, y) in mm, in one case. */
-export interface CaseLoad {
-  readonly id: string
-  readonly name?: string
-  readonly caseId: string
-  readonly P: number
-  readonly x: number
-  readonly y: number
-}
+export type CaseLoad = Readonly<Pick<SketchLoad, 'id' | 'caseId' | 'P' | 'x' | 'y'>> & { readonly name?: string }
 
 /** A load case: applied moments about the centroidal axes in N·mm (Mx varies stress with y, My with x). */
-export interface CaseDef {
-  readonly id: string
-  readonly name: string
-  readonly Mx: number
-  readonly My: number
-}
+export type CaseDef = Readonly<LoadCase>
 
 /** A combination: a factor per case id, typed by the user (no code's factors are built in). */
-export interface CombinationDef {
-  readonly id: string
-  readonly name: string
-  readonly factors: Readonly<Record<string, number>>
-}
+export type CombinationDef = Readonly<LoadCombination>
 
 /** What the stress view shows. `id` is a case or combination id; the envelope needs none. */
-export interface ShowChoice {
-  readonly type: 'case' | 'combination' | 'envelope'
-  readonly id: string | null
-}
+export type ShowChoice = Readonly<SketchSettings['show']>
 
 /** One set of loads acting together: factored point loads (N, mm), moments (N·mm), and where it came from. */
 export interface LoadSet {

@@ -97,7 +97,11 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     const found = connectionShearFlows(properties, prepared.parts.map(p => ({ index: p.index, name: p.name, n: p.n, materialKey: materialKey(p.material), polygons: p.polygons })), Vx, Vy, input.contactTolerance)
     connections = found.connections
     for (const k of found.isolated) warnings.push(`Part ${k + 1} (${prepared.parts[k]!.name}) touches no other part: the section properties assume it acts with the rest.`)
-    if (connections.some(c => c.status === 'closed-cell')) warnings.push('Some connections close a cell: their shear flow is not statically determinate and is not given.')
+    if (connections.some(c => c.status === 'closed-cell')) {
+      warnings.push(input.torsion
+        ? 'Some connections close a cell: their shear flow is not statically determinate; it is given from the finite element shear solution (torsion.connections).'
+        : 'Some connections close a cell: their shear flow is not statically determinate; ask for torsion to have it from the finite element shear solution.')
+    }
   }
 
   const P = loads.reduce((s, l) => s + l.P, 0)
@@ -131,6 +135,17 @@ export function analyseSection(input: AnalysisInput): AnalysisOutput {
     ...(table ? { checkTable: table } : {}),
     vertexCount,
     warnings,
-    ...(input.torsion ? { torsion: torsionAnalysis(prepared, { mesh: input.torsionMesh, study: input.torsionStudy, loads: input.torsionLoads }) } : {}),
+    ...(input.torsion ? { torsion: torsionWithConnections(prepared, input, connections, Vx, Vy) } : {}),
   }
+}
+
+/**
+ * Torsion, and with it the shear flow across every connection from the finite element shear
+ * solution for the input's Vx, Vy through the shear centre (`torsion.connections`, N/mm, positive
+ * from the first part into the second), which closed cells need and trees check.
+ */
+function torsionWithConnections(prepared: PreparedSection, input: TorsionInput, connections: readonly Connection[], Vx: number, Vy: number): TorsionResult {
+  const { lineFlows, ...torsion } = torsionAnalysis(prepared, { mesh: input.torsionMesh, study: input.torsionStudy, loads: input.torsionLoads, lines: connections.map(c => c.line) })
+  if (!lineFlows) return torsion
+  return { ...torsion, connections: connections.map((c, k) => ({ parts: c.parts, qVx: lineFlows[k]!.qVx, qVy: lineFlows[k]!.qVy, q: Vx * lineFlows[k]!.qVx + Vy * lineFlows[k]!.qVy })) }
 }

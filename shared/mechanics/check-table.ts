@@ -1,9 +1,10 @@
 import { polygonBoolean } from '../geometry/boolean'
 import { polygonMoments, zeroMoments, type Moments } from '../geometry/moments'
-import { normaliseRing, orientRing } from '../geometry/normalise'
+import { normaliseRing } from '../geometry/normalise'
+import { orientRing } from '../geometry/ring'
 import type { Point, Polygon, Ring } from '../geometry/types'
 import { materialKey } from './prepare'
-import type { InertiaLike } from './stress'
+import { inertiaDeterminant, type InertiaLike } from './stress'
 import type { PartInput, PreparedSection } from './types'
 
 /** What a row of the check table stands for: a part's outline, one of its holes, a cut through it, an overlap counted once, or what is left. */
@@ -193,8 +194,8 @@ export interface StressTerms {
  */
 export function stressTerms(props: InertiaLike, N: number, Mx: number, My: number, x: number, y: number, n = 1): StressTerms | null {
   const { area, Ixx, Iyy, Ixy } = props
-  const D = Ixx * Iyy - Ixy * Ixy
-  if (!(area > 0) || !(D > 1e-12 * Ixx * Iyy)) return null
+  const D = inertiaDeterminant(props)
+  if (D === null) return null
   const ky = (Mx * Iyy - My * Ixy) / D
   const kx = (My * Ixx - Mx * Ixy) / D
   const direct = N / area

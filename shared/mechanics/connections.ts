@@ -2,7 +2,7 @@ import { boxesNear, ringsBounds } from '../geometry/bounds'
 import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { polygonMoments, zeroMoments } from '../geometry/moments'
 import type { Polygon, Ring } from '../geometry/types'
-import type { InertiaLike } from './stress'
+import { inertiaDeterminant, type InertiaLike } from './stress'
 import { SectionError } from './types'
 
 /** One part for {@link connectionShearFlows}: index and name, n = E / E_ref, a material key, and its net polygons (mm). */
@@ -15,7 +15,10 @@ export interface ConnectionPart {
   readonly polygons: readonly Polygon[]
 }
 
-/** 'tree': cutting the line separates the section, q is exact; 'closed-cell': it does not, q is not statically determinate. */
+/**
+ * 'tree': cutting the line separates the section, q is exact; 'closed-cell': it does not, q is not
+ * statically determinate (the finite element shear solution gives it: torsion `connections`).
+ */
 export type ConnectionStatus = 'tree' | 'closed-cell'
 
 /** The line where two parts meet, and the shear flow it must carry (README "Method", shear flow). */
@@ -25,6 +28,11 @@ export interface Connection {
   names: [string, string]
   /** Length of the contact line (mm). */
   length: number
+  /**
+   * The contact line as straight pieces [x1, y1, x2, y2] (mm), each directed so that its right-hand
+   * normal points from the first part into the second (the sign of the finite element flow).
+   */
+  line: [number, number, number, number][]
   status: ConnectionStatus
   /** The parts on the side the line cuts off (the smaller side by area); null for a closed cell. */
   side: number[] | null
@@ -59,21 +67,22 @@ export const CONTACT_TOLERANCE = 0.1
  */
 export function connectionShearFlows(props: InertiaLike, parts: readonly ConnectionPart[], Vx: number, Vy: number, tolerance = CONTACT_TOLERANCE): ConnectionResult {
   const { Ixx, Iyy, Ixy } = props
-  const D = Ixx * Iyy - Ixy * Ixy
-  if (!(props.area > 0) || !(Ixx > 0) || !(Iyy > 0) || !(D > 1e-12 * Ixx * Iyy)) {
+  const D = inertiaDeterminant(props)
+  if (D === null) {
     throw new SectionError('The section has no area or no bending stiffness, so no shear flow can be computed.')
   }
   if (!Number.isFinite(Vx) || !Number.isFinite(Vy)) throw new SectionError('The shear forces must be finite numbers.')
   const owned = ownedPieces(parts)
   const boxes = owned.map((polygons) => (polygons.length > 0 ? ringsBounds(polygons.map((p) => p[0]!)) : null))
-  const found: { a: number; b: number; length: number }[] = []
+  const found: { a: number; b: number; length: number; line: [number, number, number, number][] }[] = []
   for (let a = 0; a < parts.length; a++) {
     for (let b = a + 1; b < parts.length; b++) {
       const boxA = boxes[a]
       const boxB = boxes[b]
       if (!boxA || !boxB || !boxesNear(boxA, boxB, tolerance)) continue
-      const length = contactLength(owned[a]!, owned[b]!, tolerance)
-      if (length > tolerance) found.push({ a, b, length })
+      const line: [number, number, number, number][] = []
+      const length = contactLength(owned[a]!, owned[b]!, tolerance, line)
+      if (length > tolerance) found.push({ a, b, length, line })
     }
   }
   const origin = [props.centroid.x, props.centroid.y] as const
@@ -87,10 +96,10 @@ export function connectionShearFlows(props: InertiaLike, parts: readonly Connect
   const connections = found.map((edge, e): Connection => {
     const pa = parts[edge.a]!
     const pb = parts[edge.b]!
-    const base = { parts: [pa.index, pb.index] as [number, number], names: [pa.name, pb.name] as [string, string], length: edge.length }
+    const base = { parts: [pa.index, pb.index] as [number, number], names: [pa.name, pb.name] as [string, string], length: edge.length, line: edge.line }
     const sideB = reachable(parts.length, found, e, edge.b)
     if (sideB.has(edge.a)) {
-      return { ...base, status: 'closed-cell', side: null, Qx: null, Qy: null, q: null, message: 'These parts close a cell: cutting this line does not free either side, so its shear flow is not statically determinate (a thin-walled closed-cell or shear-stress analysis is needed).' }
+      return { ...base, status: 'closed-cell', side: null, Qx: null, Qy: null, q: null, message: 'These parts close a cell: cutting this line does not free either side, so its shear flow is not statically determinate; the finite element shear solution (torsion) gives it.' }
     }
     const sideA = reachable(parts.length, found, e, edge.a)
     const area = (side: Set<number>) => [...side].reduce((s, k) => s + moments[k]!.A, 0)
@@ -151,28 +160,43 @@ function ownedPieces(parts: readonly ConnectionPart[]): Polygon[][] {
 /**
  * Total length (mm) over which edges of `a` and edges of `b` lie on one line within `tolerance`:
  * for each pair of edges, both ends of the shorter within tolerance of the longer's line, and the
- * overlap of their projections on it.
+ * overlap of their projections on it. Each shared piece is pushed to `line`, directed so that its
+ * right-hand normal points out of `a`'s material (into `b`).
  */
-function contactLength(a: readonly Polygon[], b: readonly Polygon[], tolerance: number): number {
-  const ringsA = a.flat()
+function contactLength(a: readonly Polygon[], b: readonly Polygon[], tolerance: number, line: [number, number, number, number][]): number {
   const ringsB = b.flat()
   const boxB = ringsBounds(ringsB)
   if (!boxB) return 0
   let total = 0
-  for (const ra of ringsA) {
-    for (let i = 0; i < ra.length; i++) {
-      const p = ra[i]!
-      const q = ra[(i + 1) % ra.length]!
-      if (Math.max(p[0], q[0]) < boxB.minX - tolerance || Math.min(p[0], q[0]) > boxB.maxX + tolerance) continue
-      if (Math.max(p[1], q[1]) < boxB.minY - tolerance || Math.min(p[1], q[1]) > boxB.maxY + tolerance) continue
-      for (const rb of ringsB) total += edgeContact(p, q, rb, tolerance)
-    }
+  for (const polygon of a) {
+    polygon.forEach((ra, r) => {
+      // Walking an outline counter-clockwise (a hole clockwise), the material is on the left.
+      const flip = (ringSignedArea(ra) > 0) !== (r === 0)
+      for (let i = 0; i < ra.length; i++) {
+        const p = ra[i]!
+        const q = ra[(i + 1) % ra.length]!
+        if (Math.max(p[0], q[0]) < boxB.minX - tolerance || Math.min(p[0], q[0]) > boxB.maxX + tolerance) continue
+        if (Math.max(p[1], q[1]) < boxB.minY - tolerance || Math.min(p[1], q[1]) > boxB.maxY + tolerance) continue
+        for (const rb of ringsB) total += edgeContact(flip ? q : p, flip ? p : q, rb, tolerance, line)
+      }
+    })
   }
   return total
 }
 
-/** Length (mm) of edge p→q shared with the edges of ring `ring` (collinear within tolerance). */
-function edgeContact(p: readonly [number, number], q: readonly [number, number], ring: Ring, tolerance: number): number {
+/** Twice the signed area of a ring (mm²): positive counter-clockwise. */
+function ringSignedArea(ring: Ring): number {
+  let s = 0
+  for (let i = 0; i < ring.length; i++) {
+    const p = ring[i]!
+    const q = ring[(i + 1) % ring.length]!
+    s += p[0] * q[1] - q[0] * p[1]
+  }
+  return s
+}
+
+/** Length (mm) of edge p→q shared with the edges of ring `ring` (collinear within tolerance); the shared pieces go to `line`. */
+function edgeContact(p: readonly [number, number], q: readonly [number, number], ring: Ring, tolerance: number, line: [number, number, number, number][]): number {
   const dx = q[0] - p[0]
   const dy = q[1] - p[1]
   const len = Math.hypot(dx, dy)
@@ -189,8 +213,12 @@ function edgeContact(p: readonly [number, number], q: readonly [number, number],
     if (Math.abs(dr) > tolerance || Math.abs(ds) > tolerance) continue
     const tr = (r[0] - p[0]) * ux + (r[1] - p[1]) * uy
     const ts = (s[0] - p[0]) * ux + (s[1] - p[1]) * uy
-    const overlap = Math.min(len, Math.max(tr, ts)) - Math.max(0, Math.min(tr, ts))
-    if (overlap > 0) total += overlap
+    const from = Math.max(0, Math.min(tr, ts))
+    const to = Math.min(len, Math.max(tr, ts))
+    if (to > from) {
+      total += to - from
+      line.push([p[0] + ux * from, p[1] + uy * from, p[0] + ux * to, p[1] + uy * to])
+    }
   }
   return total
 }

@@ -3,7 +3,7 @@ import { addRingMoments, ringArea, zeroMoments } from '../geometry/moments'
 import type { Moments } from '../geometry/moments'
 import type { Point, Polygon, Ring } from '../geometry/types'
 import type { AppliedMoments, BearingCheck, ContactResult, PointLoad, StressPoint } from './types'
-import { resultantActions, type InertiaLike } from './stress'
+import { inertiaDeterminant, resultantActions, type InertiaLike } from './stress'
 
 /** One material region for {@link solveContact}: n = E / E_ref (1 for a single material) and its polygons (mm). */
 export interface ContactRegion {
@@ -231,8 +231,8 @@ function solve3(m: Moments, r: Theta): Theta | null {
   const Iyy = Jyy - Qy * xc
   const Ixx = Jxx - Qx * yc
   const Ixy = Jxy - Qy * yc
-  const D = Ixx * Iyy - Ixy * Ixy
-  if (!(Ixx > 0) || !(Iyy > 0) || !(D > 1e-14 * Ixx * Iyy)) return null
+  const D = inertiaDeterminant({ area: A, centroid: { x: xc, y: yc }, Ixx, Iyy, Ixy })
+  if (D === null) return null
   const m1 = r[1] - xc * r[0]
   const m2 = r[2] - yc * r[0]
   const b = (Ixx * m1 - Ixy * m2) / D

@@ -1,6 +1,6 @@
 import type { Point, Ring } from '../geometry/types'
 import { SectionError } from './types'
-import type { InertiaLike } from './stress'
+import { inertiaDeterminant, type InertiaLike } from './stress'
 
 /** Relative tolerance (of the core's size) under which two core vertices are the same point. */
 const SAME_POINT = 1e-9
@@ -17,8 +17,8 @@ const STRAIGHT_TURN = 1e-12
  */
 export function kernPolygon(props: InertiaLike, hull: Ring): Point[] {
   const { area, Ixx, Iyy, Ixy } = props
-  const D = Ixx * Iyy - Ixy * Ixy
-  if (!(area > 0) || !(Ixx > 0) || !(Iyy > 0) || !(D > 1e-12 * Ixx * Iyy) || hull.length < 3) return []
+  const D = inertiaDeterminant(props)
+  if (D === null || hull.length < 3) return []
   const xc = props.centroid.x
   const yc = props.centroid.y
   const n = hull.length

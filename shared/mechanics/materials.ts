@@ -110,3 +110,12 @@ export const MATERIAL_PRESET_LIST: readonly MaterialPreset[] = [
   MATERIAL_PRESETS.masonry,
   MATERIAL_PRESETS.soil,
 ]
+
+/** The material of a part drawn without one, and of an analysis part that names none: the steel preset (E, fy, density). */
+export function defaultMaterial(): Material {
+  const { name, E, fy, density } = MATERIAL_PRESETS.steel
+  return { name, E, fy, density }
+}
+
+/** The same, as a constant for readers that do not change it. */
+export const DEFAULT_MATERIAL: Material = Object.freeze(defaultMaterial())

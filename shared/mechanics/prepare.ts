@@ -3,9 +3,11 @@ import { polygonBoolean, polygonsArea } from '../geometry/boolean'
 import { regionsHull } from '../geometry/hull'
 import { findRingsIntersection, type RingsIntersection } from '../geometry/intersections'
 import { ringArea } from '../geometry/moments'
-import { describeRing, normaliseRing, orientRing, type NormalisedRing, type RingLocation } from '../geometry/normalise'
+import { describeRing, normaliseRing, type NormalisedRing, type RingLocation } from '../geometry/normalise'
+import { orientRing } from '../geometry/ring'
 import type { Bounds, Point, Polygon, Ring } from '../geometry/types'
-import { DEFAULT_MATERIAL, SectionError } from './types'
+import { SectionError } from './types'
+import { DEFAULT_MATERIAL } from './materials'
 import type { Material, PartInput, PreparedPart, PreparedRegion, PreparedSection } from './types'
 
 /**

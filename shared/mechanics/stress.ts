@@ -49,8 +49,12 @@ export function resultantActions(props: Pick<InertiaLike, 'centroid'>, loads: re
   return { N, Mx, My, P, ex: hasP ? -My / P : null, ey: hasP ? -Mx / P : null }
 }
 
-/** D = Ixx·Iyy - Ixy² (mm⁸), or null when the section has no area or no bending stiffness. */
-function inertiaDeterminant(props: InertiaLike): number | null {
+/**
+ * D = Ixx·Iyy - Ixy² (mm⁸), or null when the section has no area or no bending stiffness (D at or
+ * below 1e-12 · Ixx·Iyy: the principal moments are that far apart in scale). The one guard every
+ * solve with the inertia matrix goes through.
+ */
+export function inertiaDeterminant(props: InertiaLike): number | null {
   const { area, Ixx, Iyy, Ixy } = props
   if (!(area > 0) || !(Ixx > 0) || !(Iyy > 0) || !Number.isFinite(Ixy)) return null
   const D = Ixx * Iyy - Ixy * Ixy

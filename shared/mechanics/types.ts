@@ -15,9 +15,6 @@ export interface Material {
   readonly noTension?: boolean
 }
 
-/** Default material: structural steel, E = 200 000 MPa (common practice). */
-export const DEFAULT_MATERIAL: Material = { name: 'Steel', E: 200_000, fy: 355, density: 7850 }
-
 /**
  * One part of a section as drawn: an outline, its own holes and a material. `holes` are voids
  * inside the outline; `notches` are openings meant to cross its edge (a slot, a cope). Both cut

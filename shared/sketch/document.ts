@@ -9,7 +9,7 @@ export const MAX_VERTICES = 250_000
 
 const finite = (what: string) => z.number({ error: `${what} must be a number` }).refine(Number.isFinite, `${what} must be a finite number`)
 const coord = finite('A coordinate').refine(v => Math.abs(v) <= 1e9, 'A coordinate must lie within ±1e9 mm')
-const Vertex = z.tuple([coord, coord], { error: 'A vertex is a pair [x, y] in mm' })
+const Vertex = z.tuple([coord, coord], { error: 'A vertex is a pair [x, y] in mm' }).readonly()
 const RingSchema = z.array(Vertex).min(3, 'A ring needs at least 3 vertices')
 const Id = z.string().min(1).max(64)
 const EffectiveLength = finite('Effective length').refine(v => v > 0, 'The effective length must be positive').nullable().default(null)

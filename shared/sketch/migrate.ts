@@ -1,7 +1,7 @@
 import { ringArea } from '../geometry/moments'
 import type { Ring } from '../geometry/types'
 import { overlapArea } from '../editor/boolean'
-import { orientRing } from '../editor/transform'
+import { orientRing } from '../geometry/ring'
 
 /** Overlaps below this fraction of the smaller area are rounding, not material (as in prepareSection). */
 const OVERLAP_TOLERANCE = 1e-6

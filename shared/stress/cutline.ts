@@ -1,4 +1,4 @@
-import { pointInRing } from '../editor/hit'
+import { pointInRing } from '../geometry/ring'
 import type { Ring } from '../geometry/types'
 
 /** One stretch of a cut line inside one region: distances s along the line (mm) and values there. */

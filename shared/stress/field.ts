@@ -2,6 +2,10 @@ import { contours } from 'd3-contour'
 import type { Bounds, Ring } from '../geometry/types'
 import type { StressPlane } from '../mechanics/types'
 import { scaleStops, type StressScale } from './scale'
+import { niceStep } from '../format/step'
+
+/** Isoline spacing: 1, 2, 2.5 or 5 × 10ⁿ (README Method, stress view). */
+const ISOLINE_STEPS = [1, 2, 2.5, 5] as const
 
 /**
  * An exact colour fill for a planar stress field over a region, as a canvas linear gradient in
@@ -149,19 +153,6 @@ export function lineAcrossBox(a: number, b: number, c: number, box: Bounds): [nu
 }
 
 /**
- * A round step ("nice": 1, 2, 2.5 or 5 × 10^k) near span / target, for isoline spacing. Positive;
- * 1 for a zero or invalid span.
- */
-export function niceStep(span: number, target = 6): number {
-  if (!(span > 0) || !Number.isFinite(span)) return 1
-  const raw = span / Math.max(1, target)
-  const pow = 10 ** Math.floor(Math.log10(raw))
-  const m = raw / pow
-  const nice = m <= 1 ? 1 : m <= 2 ? 2 : m <= 2.5 ? 2.5 : m <= 5 ? 5 : 10
-  return nice * pow
-}
-
-/**
  * Isoline values at round multiples of a nice step strictly inside (min, max) (MPa), zero left out
  * (the neutral line is drawn on its own). `step` is given in display units via `perMPa` so the labels
  * come out round in the units the user reads; values are returned in MPa.
@@ -169,7 +160,7 @@ export function niceStep(span: number, target = 6): number {
 export function isolineValues(min: number, max: number, target = 6, perMPa = 1): number[] {
   const out: number[] = []
   if (!(max > min) || !Number.isFinite(min) || !Number.isFinite(max)) return out
-  const step = niceStep((max - min) * perMPa, target) / perMPa
+  const step = niceStep((max - min) * perMPa / Math.max(1, target), ISOLINE_STEPS) / perMPa
   const first = Math.ceil(min / step)
   const last = Math.floor(max / step)
   for (let k = first; k <= last && out.length < 50; k++) {

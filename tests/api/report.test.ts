@@ -98,6 +98,24 @@ describe('GET /api/sketches/:id/report.pdf', () => {
     expect(text[text.length - 1]).toContain('Method')
   })
 
+  it('has a torsion page: J of the 300 × 20 plate as POST /api/analysis gives it and within 1 % of b·t³/3·(1 − 0.630·t/b) (thin rectangle, Roark from memory), the mesh and the cautions', async () => {
+    const { text } = await pdfPages(`/api/sketches/${id}/report.pdf`)
+    const page = text.find(p => p.includes('Torsion and shear (finite elements on the section)'))
+    expect(page).toBeDefined()
+    // "766 400 mm^4" or "7.664 × 10^5 mm^4" (formatNumber groups thousands with a thin space).
+    const m = page!.match(/J torsion constant\s+([0-9.,\s\u2009\u202f]+?)(?: × 10\^([0-9]+))? mm\^4/)
+    expect(m).not.toBeNull()
+    const printed = Number(m![1]!.replace(/[\s,\u2009\u202f]/g, '')) * 10 ** Number(m![2] ?? 0)
+    const api = await owner.post('/api/analysis', { parts: plateDoc.parts, torsion: true })
+    expect(api.status).toBe(200)
+    expect(Math.abs(printed - api.body.torsion.J) / api.body.torsion.J).toBeLessThan(5e-4) // four significant digits
+    const closed = (300 * 20 ** 3 / 3) * (1 - 0.630 * 20 / 300)
+    expect(Math.abs(printed - closed) / closed).toBeLessThan(0.01)
+    expect(page).toMatch(new RegExp(`Elements\\s+${api.body.torsion.mesh.elements}\\b`))
+    expect(page).toContain('Mesh study: density')
+    expect(page!.replace(/\s+/g, ' ')).toContain('Neglected: warping torsion along the member')
+  })
+
   it('?revision=N of a revision that does not exist answers 404, a bad revision or paper 400', async () => {
     const r = await owner.get(`/api/sketches/${id}/report.pdf?revision=3`)
     expect(r.status).toBe(404)

@@ -8,13 +8,14 @@ import { CAUTION, METHOD_SECTIONS } from './method'
 import { heading, para, table } from './table'
 import { pdfText, q, stressCT, u, v } from './text'
 import { CONTENT_TOP, drawTitleBlock } from './title-block'
+import { torsionPage } from './torsion'
 import type { ReportInput } from './types'
 import { woffToSfnt } from './woff'
 
 /**
  * Renders the calculation sheet as a PDF (pdfkit, IBM Plex embedded): the drawing to scale,
- * materials, properties, loads, stresses at the extremes and every vertex, contact, checks, and the
- * method with the cautions; the title block and the "not checked" mark on every page.
+ * materials, properties, loads, stresses at the extremes and every vertex, contact, checks, torsion
+ * (when the analysis has it), and the method with the cautions; the title block and the "not checked" mark on every page.
  */
 export function renderCalculationSheet(input: ReportInput): Promise<Buffer> {
   const regular = Buffer.from(woffToSfnt(input.fonts.regular, { plain: true }))
@@ -123,6 +124,7 @@ function body(doc: Doc, input: ReportInput): void {
       sd.combinations.map(c => [c.name, sd.cases.map(k => `${c.factors[k.id] ?? 0} × ${k.name}`).join(' + ')]), 'Combinations')
   }
   if (a) stressPages(doc, input, width)
+  torsionPage(doc, input)
   methodPage(doc, input)
 }
 

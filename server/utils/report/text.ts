@@ -3,7 +3,7 @@ import { formatNumber, toDisplay, unitLabel, type Quantity, type Units } from '.
 // The PDF embeds the Latin subset of IBM Plex: superscripts beyond ³ and Greek or maths signs are
 // spelled out so no glyph goes missing (a missing glyph prints as a blank box).
 const SPELL: Record<string, string> = {
-  '⁰': '^0', '⁴': '^4', '⁵': '^5', '⁶': '^6', '⁷': '^7', '⁸': '^8', '⁹': '^9', '⁻': '^-', 'σ': 'sigma', 'θ': 'theta',
+  '⁰': '^0', '⁴': '^4', '⁵': '^5', '⁶': '^6', '⁷': '^7', '⁸': '^8', '⁹': '^9', '⁻': '^-', 'σ': 'sigma', 'θ': 'theta', 'τ': 'tau', 'ω': 'omega', 'ν': 'nu',
   '√': 'sqrt', '≥': '>=', '≤': '<=', '≠': '!=', 'π': 'pi', 'Σ': 'sum ', '∫': 'int ', '⅙': '1/6', '⁄': '/', '≈': '~', '→': '->', '±': '±',
 }
 
@@ -12,7 +12,7 @@ export function pdfText(s: string): string {
   const plain = (run: string) => run.replace(/[⁰¹²³⁴-⁹⁻]/g, c => ('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c) >= 0 ? String('⁰¹²³⁴⁵⁶⁷⁸⁹'.indexOf(c)) : '-'))
   // An exponent of ten ("× 10⁻¹⁴") becomes "× 10^-14"; a unit's ² and ³ stay (they are in Latin-1).
   s = s.replace(/10([⁰¹²³⁴-⁹⁻]+)/g, (_m, run: string) => `10^${plain(run)}`)
-  return s.replace(/[⁰⁴-⁹⁻σθ√≥≤≠πΣ∫⅙⁄≈→]/g, c => SPELL[c] ?? c)
+  return s.replace(/[⁰⁴-⁹⁻σθτων√≥≤≠πΣ∫⅙⁄≈→]/g, c => SPELL[c] ?? c)
 }
 
 /** A model value (mm, N, MPa, N·mm…) in the sheet's unit system, four significant digits and its unit. */

@@ -23,8 +23,10 @@ export interface ReportInput {
   approval: ReportApproval | null
   date: Date
   doc: SketchDocument
-  /** The analysis of `doc` under its shown loading (with `checkTable`), or null with `analysisError`. */
+  /** The analysis of `doc` under its shown loading (with `checkTable`, and `torsion` with its mesh study for the torsion page), or null with `analysisError`. */
   analysis: AnalysisOutput | null
   analysisError: string | null
+  /** Why `analysis.torsion` is missing when the torsion solve refused the section (the sheet says so); null otherwise. */
+  torsionError?: string | null
   fonts: { regular: Uint8Array; bold: Uint8Array }
 }

@@ -3,7 +3,8 @@ import { SectionError, type Material, type PreparedSection } from '../types'
 import { meshSection } from './mesh'
 import { solveSectionFe, type SectionSolution } from './section-fe'
 import { shearStressField, type ShearStressField, type TorsionLoads } from './shear-stress'
-import type { TorsionMeshDensity, TorsionRegion } from './types'
+import { lineShearFlows, type LineFlow, type LineSegment } from './line-flow'
+import type { TorsionMeshDensity, TorsionPoint, TorsionRegion } from './types'
 
 /** Poisson's ratio when a material gives none: 0.3, structural steel (common practice). */
 export const DEFAULT_POISSON = 0.3
@@ -15,6 +16,8 @@ export interface TorsionOptions {
   readonly mesh?: TorsionMeshDensity
   readonly study?: boolean
   readonly loads?: TorsionLoads
+  /** Lines across the section (section coordinates, mm) whose shear flow per unit Vx and Vy is wanted (the connections). */
+  readonly lines?: readonly (readonly LineSegment[])[]
 }
 
 /** The torsion fields of an analysis request (see shared/analysis/torsion-contract.ts). */
@@ -44,6 +47,11 @@ export interface TorsionResult {
   Cw: number
   shearCentre: { x: number; y: number }
   shearAreas: { x: number; y: number }
+  /**
+   * Largest |τ| per unit torque T about the shear centre (MPa per N·mm, i.e. 1/mm³) and where it is
+   * (section coordinates, mm): τ_max = value · T for uniform torsion.
+   */
+  torsionStress: TorsionPoint
   /** Poisson's ratio used by the flexure functions (E·A-weighted mean of the materials). */
   nu: number
   referenceG: number
@@ -54,6 +62,13 @@ export interface TorsionResult {
   iterations: number
   study?: { rows: TorsionStudyRow[]; difference: { J: number; shearCentre: number } }
   stress?: ShearStressField
+  /** Shear flow per unit Vx and Vy across each of `options.lines`, in their order (N/mm per N). */
+  lineFlows?: LineFlow[]
+  /**
+   * Per connection (analyze.ts), from the finite element shear solution for Vx, Vy through the shear
+   * centre: q across its line (N/mm, positive from the first part into the second) and per unit Vx, Vy (1/mm).
+   */
+  connections?: { parts: [number, number]; q: number; qVx: number; qVy: number }[]
   warnings: string[]
 }
 
@@ -94,6 +109,7 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
   if (sol.pieces > 1) warnings.push(`The section is ${sol.pieces} separate pieces: J is their sum, and the shear centre and Cw treat them as acting together.`)
   const result: TorsionResult = {
     ...summary(sol, ox, oy),
+    torsionStress: shearStressField(sol, { Vx: 0, Vy: 0, T: 1 }, ox, oy).max,
     nu: sol.nu,
     referenceG,
     equivalent: prepared.regions.length > 1,
@@ -119,6 +135,7 @@ export function torsionAnalysis(prepared: PreparedSection, options: TorsionOptio
     }
   }
   if (options.loads) result.stress = shearStressField(sol, options.loads, ox, oy)
+  if (options.lines?.length) result.lineFlows = lineShearFlows(sol, options.lines, ox, oy)
   return result
 }
 

@@ -23,18 +23,15 @@ export interface ShearStressField {
 }
 
 /**
- * τ from Vx, Vy (through the shear centre) and T (about it): torsion m·T/J·(∇ω − (y, −x)) plus
- * flexure n·[Vx (∇Ψ − ν/2·d) + Vy (∇Φ − ν/2·h)] / (2(1+ν)(Ixx·Iyy − Ixy²)) (Pilkey 2002), with n
- * and m the element's E and G ratios; (ox, oy) is added to report section coordinates.
+ * τ = (τzx, τzy) (MPa) in element e at barycentric (L0, L1, L2), with the point (mesh frame, mm):
+ * torsion m·T/J·(∇ω − (y, −x)) plus flexure n·[Vx (∇Ψ − ν/2·d) + Vy (∇Φ − ν/2·h)] /
+ * (2(1+ν)(Ixx·Iyy − Ixy²)) (Pilkey 2002), with n and m the element's E and G ratios.
  */
-export function shearStressField(sol: SectionSolution, loads: TorsionLoads, ox: number, oy: number): ShearStressField {
+export function stressEvaluator(sol: SectionSolution, loads: TorsionLoads): (e: number, L0: number, L1: number, L2: number) => [number, number, number, number] {
   const { mesh, regions, cx, cy, Ixx, Iyy, Ixy, nu, J } = sol
   const shape = shapeEvaluator(mesh)
   const deltaS = 2 * (1 + nu) * (Ixx * Iyy - Ixy * Ixy)
-  const ne = mesh.elements.length / 6
-  const tau: number[] = new Array(2 * ne)
-  const max: TorsionPoint = { value: 0, x: ox + cx, y: oy + cy }
-  const at = (e: number, L0: number, L1: number, L2: number): [number, number, number, number] => {
+  return (e: number, L0: number, L1: number, L2: number): [number, number, number, number] => {
     const s = shape.at(e, L0, L1, L2, 1)
     const r = regions[mesh.region[e]!]!
     const x = s.x - cx; const y = s.y - cy
@@ -48,6 +45,19 @@ export function shearStressField(sol: SectionSolution, loads: TorsionLoads, ox: 
       (r.n * (loads.Vx * (py - (nu / 2) * (Ixy * rr + Ixx * q)) + loads.Vy * (fy - (nu / 2) * (-Iyy * rr - Ixy * q)))) / deltaS
     return [tx, ty, s.x, s.y]
   }
+}
+
+/**
+ * τ from Vx, Vy (through the shear centre) and T (about it): torsion m·T/J·(∇ω − (y, −x)) plus
+ * flexure n·[Vx (∇Ψ − ν/2·d) + Vy (∇Φ − ν/2·h)] / (2(1+ν)(Ixx·Iyy − Ixy²)) (Pilkey 2002), with n
+ * and m the element's E and G ratios; (ox, oy) is added to report section coordinates.
+ */
+export function shearStressField(sol: SectionSolution, loads: TorsionLoads, ox: number, oy: number): ShearStressField {
+  const { mesh, cx, cy } = sol
+  const at = stressEvaluator(sol, loads)
+  const ne = mesh.elements.length / 6
+  const tau: number[] = new Array(2 * ne)
+  const max: TorsionPoint = { value: 0, x: ox + cx, y: oy + cy }
   for (let e = 0; e < ne; e++) {
     const [tx, ty] = at(e, 1 / 3, 1 / 3, 1 / 3)
     tau[2 * e] = tx

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { hitEdge, hitPart, hitVertex, pointInRing, segmentDistance2 } from '#shared/editor/hit'
+import { hitEdge, hitPart, hitVertex, segmentDistance2 } from '#shared/editor/hit'
+import { pointInRing } from '#shared/geometry/ring'
 
 const outer = [[0, 0], [100, 0], [100, 100], [0, 100]] as const
 const hole = [[40, 40], [40, 60], [60, 60], [60, 40]] as const

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { niceStep, snapPoint, snapToGrid } from '#shared/editor/snap'
+import { snapPoint, snapToGrid } from '#shared/editor/snap'
+import { niceStep } from '#shared/format/step'
 
 const square = [[0, 0], [100, 0], [100, 100], [0, 100]] as const
 

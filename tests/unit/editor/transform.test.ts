@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { ringArea } from '#shared/geometry/moments'
-import { deleteVertex, fitBounds, insertVertex, mirrorRing, orientRing, rectangleRing, ringsBounds, rotateRing, setVertex, translateRing } from '#shared/editor/transform'
+import { deleteVertex, fitBounds, insertVertex, mirrorRing, rectangleRing, ringsBounds, rotateRing, setVertex, translateRing } from '#shared/editor/transform'
+import { orientRing } from '#shared/geometry/ring'
 import { angleDeg, roundAngle } from '#shared/editor/gesture'
 
 const sq = rectangleRing([0, 0], [20, 10])

@@ -8,7 +8,7 @@ import { exportJson, importJson, isKernwiseJson } from '../../../shared/export/j
 import { EXPORT_COLOURS, exportSvg } from '../../../shared/export/svg'
 import { formatNumber } from '../../../shared/editor/units'
 import { importDxf } from '../../../shared/import/dxf'
-import { signedArea } from '../../../shared/import/geometry'
+import { ringArea as signedArea } from '../../../shared/geometry/moments'
 import { analyseSection } from '../../../shared/mechanics/analyze'
 import { SketchDocumentSchema } from '../../../shared/sketch/document'
 
@@ -91,7 +91,8 @@ describe('exportSvg of a no-tension section', () => {
   it('shows the contact pressure, compression only (no tension colour), with the peak 2P/(3B(L/2 - e)) of the standard footing result', () => {
     const a = analyseSection({ parts: [{ outline: [[-500, -500], [500, -500], [500, 500], [-500, 500]], material: { E: 50 } }], loads: [{ P: 1e6, x: 0, y: 300 }], noTension: true })
     const svg = exportSvg(a, 'Pad', 'SI')
-    expect(svg).toContain('Contact pressure (no tension)')
+    expect(svg).toContain('>Contact pressure</text><text')
+    expect(svg).toContain('>(no tension)</text>')
     expect(svg).not.toContain(EXPORT_COLOURS.tension)
     expect(svg).toContain(`peak ${formatNumber(2e6 / (3 * 1000 * 200))} MPa C`)
   })
@@ -110,5 +111,40 @@ describe('exports follow the area and inertia units chosen in the settings bar',
     expect(row('A')).toEqual(['A', '200', 'cm²'])
     expect(Number(row('Ixx')[1])).toBeCloseTo((200 * 100 ** 3) / 12 / 1e4, 6)
     expect(row('Ixx')[2]).toBe('cm⁴')
+  })
+})
+
+describe('exportSvg of the current view', () => {
+  const view = { zoom: 3, panX: 100, panY: 500, width: 900, height: 600 }
+  it('draws at the view\'s zoom and pan (screen = panX + zoom·x, panY − zoom·y, as the canvas does), clipped to it, the legend to its right', () => {
+    const svg = exportSvg(analysis, 'Plate', 'SI', 1200, 800, view)
+    expect(svg).toMatch(/^<svg xmlns="http:\/\/www.w3.org\/2000\/svg" width="1100" height="600"/) // 900 + the 200 px legend column
+    expect(svg).toContain('data-mode="view"')
+    expect(svg).toContain('<clipPath id="drawing"><rect width="900" height="600"/></clipPath>')
+    // Every outline vertex is where the canvas puts it.
+    const ring = analysis.regions[0]!.polygons[0]![0]!
+    for (const [x, y] of ring) expect(svg).toContain(`${+(100 + 3 * x).toFixed(2)},${+(500 - 3 * y).toFixed(2)}`)
+    expect(svg).toContain('data-role="legend"')
+    expect(svg).toContain('<rect x="910" y="60" width="24" height="240"') // the legend column starts after the view
+  })
+  it('the scale bar is a 1, 2 or 5 × 10^k length at the view\'s zoom, at most a quarter of the view wide', () => {
+    const svg = exportSvg(analysis, 'Plate', 'SI', 1200, 800, view)
+    const m = svg.match(/data-role="scale-bar" data-mm="([\d.e+-]+)" data-px="([\d.]+)"/)
+    expect(m).not.toBeNull()
+    const mm = Number(m![1]); const px = Number(m![2])
+    expect(px).toBeCloseTo(3 * mm, 2) // zoom = 3 px per mm
+    expect(px).toBeLessThanOrEqual(900 / 4)
+    expect(mm / 10 ** Math.floor(Math.log10(mm))).toBeOneOf([1, 2, 5])
+    expect(svg).toContain(`>${formatNumber(mm)} mm</text>`)
+  })
+  it('a zoom twice as close draws the same section twice as large', () => {
+    const near = exportSvg(analysis, 'Plate', 'SI', 1200, 800, { ...view, zoom: 6 })
+    const [x, y] = analysis.regions[0]!.polygons[0]![0]![0]!
+    expect(near).toContain(`${+(100 + 6 * x).toFixed(2)},${+(500 - 6 * y).toFixed(2)}`)
+  })
+  it('without a view the whole section is fitted into 1200 × 800 as before', () => {
+    const svg = exportSvg(analysis, 'Plate', 'SI')
+    expect(svg).toContain('data-mode="section"')
+    expect(svg).toContain('<clipPath id="drawing"><rect width="1000" height="800"/></clipPath>')
   })
 })

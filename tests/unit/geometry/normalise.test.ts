@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { ringArea } from '../../../shared/geometry/moments'
-import { describeRing, normaliseRing, orientRing } from '../../../shared/geometry/normalise'
+import { describeRing, normaliseRing } from '../../../shared/geometry/normalise'
+import { orientRing } from '../../../shared/geometry/ring'
 import type { Point } from '../../../shared/geometry/types'
 import { SectionError } from '../../../shared/mechanics/types'
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { importCsv } from '../../../shared/import/csv'
 import { detectFormat } from '../../../shared/import/detect'
-import { signedArea } from '../../../shared/import/geometry'
+import { ringArea as signedArea } from '../../../shared/geometry/moments'
 import { ImportError } from '../../../shared/import/types'
 
 const area = (ring: [number, number][]) => Math.abs(signedArea(ring))

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { importDxf } from '../../../shared/import/dxf'
-import { signedArea } from '../../../shared/import/geometry'
+import { ringArea as signedArea } from '../../../shared/geometry/moments'
 import { ImportError } from '../../../shared/import/types'
 import { expectClose } from '../../support/expect-close'
 import { arc, circle, dxf, line, lwpolyline } from './dxf-text'

@@ -65,7 +65,7 @@ describe('shear flow per connection (README "Method": q = V·Q/I of the side a c
       expect(c.q).toBeNull()
       expectClose(c.length, 10, 1e-12)
     }
-    expect(a.warnings).toContain('Some connections close a cell: their shear flow is not statically determinate and is not given.')
+    expect(a.warnings).toContain('Some connections close a cell: their shear flow is not statically determinate; ask for torsion to have it from the finite element shear solution.')
   })
 
   it('a part that touches no other part is named in a warning', () => {

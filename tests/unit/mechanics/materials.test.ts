@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { MATERIAL_PRESET_LIST, MATERIAL_PRESETS } from '../../../shared/mechanics/materials'
-import { DEFAULT_MATERIAL } from '../../../shared/mechanics/types'
+import { DEFAULT_MATERIAL, defaultMaterial, MATERIAL_PRESET_LIST, MATERIAL_PRESETS } from '../../../shared/mechanics/materials'
 
 describe('MATERIAL_PRESETS', () => {
   it('lists steel, aluminium, timber, concrete, masonry and soil under a footing, in that display order', () => {
@@ -37,9 +36,12 @@ describe('MATERIAL_PRESETS', () => {
     expect(MATERIAL_PRESETS.steel.source).toContain('EN 1993-1-1 §3.2.6 uses 210 000 MPa')
   })
 
-  it('the steel preset agrees with the app default material', () => {
-    expect(MATERIAL_PRESETS.steel.E).toBe(DEFAULT_MATERIAL.E)
-    expect(MATERIAL_PRESETS.steel.fy).toBe(DEFAULT_MATERIAL.fy)
-    expect(MATERIAL_PRESETS.steel.density).toBe(DEFAULT_MATERIAL.density)
+  it('the default material is structural steel, and a fresh copy each time', () => {
+    // E 200 000 MPa: common practice; fy 355 MPa: S355 to EN 10025-2 (t <= 16 mm); 7850 kg/m³: handbook value, from memory.
+    expect(DEFAULT_MATERIAL).toEqual({ name: 'Steel', E: 200_000, fy: 355, density: 7850 })
+    const a = defaultMaterial()
+    ;(a as { E: number }).E = 1
+    expect(defaultMaterial().E).toBe(200_000)
+    expect(MATERIAL_PRESETS.steel.E).toBe(200_000)
   })
 })

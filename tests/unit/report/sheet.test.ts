@@ -68,3 +68,95 @@ describe('report helpers', () => {
     expect(pdfText('1.2 × 10⁻¹⁴ mm⁴, 3 mm², σ')).toBe('1.2 × 10^-14 mm^4, 3 mm², sigma')
   })
 })
+
+describe('the torsion page', () => {
+  const r = 50
+  // A 256-gon inscribed in a circle of radius 50 mm: its J is within 0.03 % of the circle's.
+  const circle = SketchDocumentSchema.parse({
+    schema: 'kernwise.sketch/2',
+    parts: [{ id: 'c', name: 'Bar', outline: Array.from({ length: 256 }, (_, i) => [r * Math.cos((2 * Math.PI * i) / 256), r * Math.sin((2 * Math.PI * i) / 256)]), material: { name: 'Steel', E: 200000 }, shape: null }],
+    cases: [{ id: 'c', name: 'Dead', Mx: 0, My: 0 }],
+    loads: [],
+    settings: {},
+  })
+  const analysis = analyseSection({ ...AnalysisRequest.parse(analysisRequestFor(circle)), checkTable: true, torsion: true, torsionStudy: true })
+  const input: ReportInput = { ...base, title: 'Round bar', doc: circle, analysis }
+  /** The number printed after a row label on the sheet ("9.816 × 10^6 mm^4" is 9.816e6 in mm^4). */
+  const number = (t: string, label: string) => {
+    const m = t.match(new RegExp(`${label}\\s+(−?[0-9.]+)(?: × 10\\^(-?[0-9]+))?(?:\\s+(\\S+))?`))
+    if (!m) throw new Error(`no "${label}" on the sheet`)
+    return { value: Number(m[1]!.replace('−', '-')) * 10 ** Number(m[2] ?? 0), unit: m[3] ?? '' }
+  }
+
+  it('prints J of a solid circle: the analysis value, and pi·r⁴/2 within 1 % (closed form, J = Ip for a circle)', async () => {
+    const t = await text(input)
+    expect(t).toContain('Torsion and shear (finite elements on the section)')
+    const J = number(t, 'J torsion constant')
+    expect(J.unit).toBe('mm^4')
+    const fe = analysis.torsion!.J
+    expect(Math.abs(J.value - fe) / fe).toBeLessThan(5e-4) // four significant digits of the analysis
+    expect(Math.abs(J.value - (Math.PI * r ** 4) / 2) / ((Math.PI * r ** 4) / 2)).toBeLessThan(0.01)
+  })
+  it('prints tau_max per unit torque of the circle: 2/(pi·r³) within 2 % (closed form tau = T·r/J), the shear centre at the centre and the shear areas of the analysis', async () => {
+    const t = await text(input)
+    const tau = number(t, 'Max torsional shear stress per unit torque')
+    expect(tau.unit).toBe('MPa')
+    // MPa per kN·m: 1 kN·m = 10⁶ N·mm.
+    const expected = (2 / (Math.PI * r ** 3)) * 1e6
+    expect(Math.abs(tau.value - expected) / expected).toBeLessThan(0.02)
+    expect(t).toMatch(/MPa per kN·m/)
+    expect(t).toMatch(/Shear centre from the centroid\s+0 mm, 0 mm/)
+    // The shear areas as the analysis gives them (their closed forms are checked in tests/unit/mechanics/torsion).
+    const ratio = t.match(/Shear area \/ A along x, along y\s+([0-9.]+), ([0-9.]+)/)
+    expect(ratio).not.toBeNull()
+    expect(Number(ratio![1])).toBeCloseTo(analysis.torsion!.shearAreas.x / analysis.properties.area, 3)
+    expect(Number(ratio![2])).toBeCloseTo(analysis.torsion!.shearAreas.y / analysis.properties.area, 3)
+  })
+  it('prints the mesh (section vertices, nodes, elements) and the mesh study with its difference', async () => {
+    const t = await text(input)
+    expect(number(t, 'Section vertices').value).toBe(256)
+    expect(number(t, 'Nodes \\(six-node triangles\\)').value).toBe(analysis.torsion!.mesh.nodes)
+    expect(number(t, 'Elements').value).toBe(analysis.torsion!.mesh.elements)
+    expect(t).toContain('Mesh study: density')
+    const study = analysis.torsion!.study!
+    expect(t).toMatch(new RegExp(`coarse\\s+${study.rows[0]!.nodes}\\s+${study.rows[0]!.elements}`))
+    expect(t).toMatch(/Mesh study: J differs by [0-9.]+ %/)
+  })
+  it('states the method and what it neglects, with the cautions', async () => {
+    const t = (await text(input)).replace(/\s+/g, ' ')
+    expect(t).toContain('Elastic, uniform (Saint-Venant) torsion')
+    expect(t).toContain('finite element method on the section')
+    expect(t).toContain('Neglected: warping torsion along the member')
+    expect(t).toContain('buckling of any kind')
+    expect(t).toContain('Cautions for torsion')
+  })
+  it('a section the torsion solve refused says why on the torsion page and keeps the rest', async () => {
+    const t = await text({ ...base, torsionError: 'Torsion takes at most 20000 vertices (this section has 20004).' })
+    expect(t).toContain('Torsion was not computed: Torsion takes at most 20000 vertices')
+    expect(t).toContain('Check table')
+  })
+  it('a sheet without torsion asked has no torsion page', async () => {
+    expect(await text(base)).not.toContain('Torsion and shear (finite elements')
+  })
+})
+
+describe('the torsion page: shear flow per connection', () => {
+  const plate = (id: string, name: string, x: number, y: number, w: number, h: number) => ({ id, name, outline: [[x, y], [x + w, y], [x + w, y + h], [x, y + h]], material: { name: 'Steel', E: 200000 }, shape: null })
+  const box = SketchDocumentSchema.parse({
+    schema: 'kernwise.sketch/2',
+    parts: [plate('t', 'Top', -100, 140, 200, 10), plate('r', 'Right', 90, -140, 10, 280), plate('b', 'Bottom', -100, -150, 200, 10), plate('l', 'Left', -100, -140, 10, 280)],
+    cases: [{ id: 'c', name: 'Dead', Mx: 0, My: 0 }],
+    loads: [],
+    settings: { shear: { Vx: 0, Vy: 100000 } },
+  })
+  it('a box of four plates lists each weld with |q| from the FE solution, Vy·Q/Ixx of half a flange within 1 % (thin-walled closed-cell result)', async () => {
+    const analysis = analyseSection({ ...AnalysisRequest.parse(analysisRequestFor(box)), checkTable: true, torsion: true })
+    const t = await text({ ...base, doc: box, analysis })
+    const Ixx = 2 * (200 * 10 ** 3 / 12 + 2000 * 145 ** 2) + 2 * (10 * 280 ** 3 / 12) // parallel axes by hand
+    const expected = (100000 * 100 * 10 * 145) / Ixx
+    const rows = [...t.matchAll(/Top – Right\s+10\s+([0-9.]+)\s+finite element shear solution \(closed cell\)/g)]
+    expect(rows).toHaveLength(1)
+    expect(Math.abs(Number(rows[0]![1]) - expected) / expected).toBeLessThan(0.01)
+    expect(t.match(/finite element shear solution \(closed cell\)/g)).toHaveLength(4)
+  })
+})

@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
+import { beforeEach, describe, expect, it } from 'vitest'
 import { createPinia, setActivePinia } from 'pinia'
 import { watch } from 'vue'
 import { emptyDocument, type SketchDocument } from '#shared/sketch/document'
@@ -7,7 +7,7 @@ import { rectangleRing } from '#shared/editor/transform'
 import { analysisRequestFor } from '#shared/editor/analysis-request'
 import { AnalysisRequest } from '#shared/analysis/contract'
 import { analyseSection } from '#shared/mechanics/analyze'
-import { HOLD_MS, useSketchStore } from '../../../stores/sketch'
+import { useSketchStore } from '../../../stores/sketch'
 
 const net = (s: ReturnType<typeof useSketchStore>, id: string) => {
   const p = s.partById(id)!
@@ -238,92 +238,5 @@ describe('sketch store: loads, cases and combinations, each with its undo', () =
     s.setMeta({ title: 'New' })
     expect(s.meta!.title).toBe('New')
     expect(s.canUndo).toBe(false)
-  })
-})
-
-describe('sketch store: a gesture\'s change held until its analysis is in', () => {
-  beforeEach(() => setActivePinia(createPinia()))
-  afterEach(() => vi.useRealTimers())
-
-  /** A hold that records the document it was given and settles when `release` is called. */
-  function holdProbe() {
-    const seen: SketchDocument[] = []
-    let release: () => void = () => {}
-    const hold = (next: SketchDocument) => {
-      seen.push(next)
-      return new Promise<void>((resolve) => { release = resolve })
-    }
-    return { seen, hold, release: () => release() }
-  }
-
-  it('moveVertex with a hold gives it the document as it will be, and commits when the hold settles', async () => {
-    const s = fresh()
-    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
-    const before = s.doc
-    const probe = holdProbe()
-    s.moveVertex(id, 0, 2, [120, 60], probe.hold)
-    expect(s.doc).toBe(before)
-    expect(s.staged).not.toBeNull()
-    expect(probe.seen[0]!.parts[0]!.outline[2]).toEqual([120, 60])
-    expect(probe.seen[0]!.loads).toBe(before.loads)
-    probe.release()
-    await Promise.resolve()
-    await Promise.resolve()
-    expect(s.staged).toBeNull()
-    expect(s.doc.parts[0]!.outline[2]).toEqual([120, 60])
-    expect(s.doc.parts).toBe(probe.seen[0]!.parts)
-    s.undo()
-    expect(s.doc.parts).toEqual(before.parts)
-  })
-
-  it('a held change is committed after HOLD_MS when its analysis does not come', () => {
-    vi.useFakeTimers()
-    const s = fresh()
-    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
-    const revision = s.revision
-    s.moveParts([id], 10, 0, () => new Promise(() => {}))
-    vi.advanceTimersByTime(HOLD_MS - 1)
-    expect(s.revision).toBe(revision)
-    vi.advanceTimersByTime(1)
-    expect(s.revision).toBe(revision + 1)
-    expect(s.doc.parts[0]!.outline[0]).toEqual([10, 0])
-  })
-
-  it('any other action commits the held change first, so undo takes them back in order', () => {
-    const s = fresh()
-    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
-    const probe = holdProbe()
-    s.rotateParts([id], 90, [0, 0], probe.hold)
-    s.addLoad({ caseId: 'case-1', P: 1000, x: 0, y: 0 })
-    expect(s.staged).toBeNull()
-    expect(s.doc.loads).toHaveLength(1)
-    expect(s.undo()).toBe('Add load')
-    expect(s.undo()).toBe('Rotate 90°')
-    expect(s.doc.parts[0]!.outline).toEqual(rectangleRing([0, 0], [100, 50]))
-  })
-
-  it('undo while a change is held commits it, then undoes it', () => {
-    const s = fresh()
-    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
-    const probe = holdProbe()
-    s.moveVertex(id, 0, 0, [-5, -5], probe.hold)
-    expect(s.undo()).toBe('Move vertex')
-    expect(s.doc.parts[0]!.outline[0]).toEqual([0, 0])
-    expect(s.redo()).toBe('Move vertex')
-    expect(s.doc.parts[0]!.outline[0]).toEqual([-5, -5])
-  })
-
-  it('a hold that has nothing to wait for (null) commits at once; loading another sketch drops a held change', () => {
-    vi.useFakeTimers()
-    const s = fresh()
-    const id = s.addPart({ outline: rectangleRing([0, 0], [100, 50]) })
-    s.moveParts([id], 0, 10, () => null)
-    expect(s.doc.parts[0]!.outline[0]).toEqual([0, 10])
-    s.moveParts([id], 0, 10, () => new Promise(() => {}))
-    s.load({ id: 's2', title: 'Other', project: '', description: '', status: 'draft', version: 1, ownerId: 'u', createdAt: '', updatedAt: '', partCount: 0, document: emptyDocument() })
-    vi.advanceTimersByTime(HOLD_MS)
-    expect(s.staged).toBeNull()
-    expect(s.doc.parts).toHaveLength(0)
-    expect(s.revision).toBe(0)
   })
 })

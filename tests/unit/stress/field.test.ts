@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import type { Ring } from '../../../shared/geometry/types'
-import { contourBands, envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, niceStep, planeGradient, sampleGrid } from '../../../shared/stress/field'
+import { niceStep } from '../../../shared/format/step'
+import { contourBands, envelopeBands, isolineValues, lineAcrossBox, lineInRings, longestSegment, planeGradient, sampleGrid } from '../../../shared/stress/field'
 import { cutLineProfile } from '../../../shared/stress/cutline'
 import { stressScale } from '../../../shared/stress/scale'
 import { expectClose } from '../../support/expect-close'
@@ -56,8 +57,8 @@ describe('lineInRings', () => {
 
 describe('isolines', () => {
   it('niceStep rounds to 1, 2, 2.5 or 5 × 10^k', () => {
-    expect(niceStep(8.3, 6)).toBe(2)
-    expect(niceStep(100, 4)).toBe(25)
+    expect(niceStep(8.3 / 6, [1, 2, 2.5, 5])).toBe(2)
+    expect(niceStep(100 / 4, [1, 2, 2.5, 5])).toBe(25)
     expect(niceStep(0)).toBe(1)
   })
 

@@ -2,8 +2,7 @@ import { IdParams } from '../../../../shared/auth/schemas'
 import { AnalysisRequest } from '../../../../shared/analysis/contract'
 import { analysisRequestFor } from '../../../../shared/editor/analysis-request'
 import { ReportQuery } from '../../../../shared/export/report-query'
-import { analyseSection, type AnalysisOutput } from '../../../../shared/mechanics/analyze'
-import { SectionError } from '../../../../shared/mechanics/types'
+import type { AnalysisOutput } from '../../../../shared/mechanics/analyze'
 import { renderCalculationSheet } from '../../../utils/report/sheet'
 
 /**
@@ -20,13 +19,23 @@ export default defineEventHandler(async (event) => {
   const doc = readDocument(revision ? revision.document : sketch.document)
   let analysis: AnalysisOutput | null = null
   let analysisError: string | null = null
+  let torsionError: string | null = null
   const request = analysisRequestFor(doc)
   if (request) {
+    const body = { ...AnalysisRequest.parse(request), checkTable: true }
+    // The torsion page's finite element solve (with its mesh study) runs in the analysis pool, off
+    // the event loop; a section the torsion solve refuses still gets the rest of the sheet.
     try {
-      analysis = analyseSection({ ...AnalysisRequest.parse(request), checkTable: true })
+      analysis = await analyse(event, { ...body, torsion: true, torsionStudy: true })
     } catch (error) {
-      if (!(error instanceof SectionError)) throw error
-      analysisError = error.message
+      if (!isGeometryError(error)) throw error
+      try {
+        analysis = await analyse(event, body)
+        torsionError = (error as { message: string }).message
+      } catch (again) {
+        if (!isGeometryError(again)) throw again
+        analysisError = (again as { message: string }).message
+      }
     }
   }
   const fonts = useStorage('assets:fonts')
@@ -48,6 +57,7 @@ export default defineEventHandler(async (event) => {
     doc,
     analysis,
     analysisError,
+    torsionError,
     fonts: { regular: toBytes(regular), bold: toBytes(bold) },
   })
   const file = `${sketch.title.replace(/[^\w.-]+/g, '-').slice(0, 60) || 'sketch'}-calculation.pdf`
@@ -63,4 +73,15 @@ function toBytes(raw: unknown): Uint8Array {
   if (raw instanceof Uint8Array) return raw
   if (raw instanceof ArrayBuffer) return new Uint8Array(raw)
   throw createError({ statusCode: 500, message: 'The report fonts are missing from the server build.' })
+}
+
+/** The analysis of a sheet: in a pool worker when it is heavy (torsion), else in-line; bad geometry throws a 422. */
+async function analyse(event: Parameters<typeof analyseInPool>[0], input: Parameters<typeof analyseInPool>[1]): Promise<AnalysisOutput> {
+  const result = await analyseInPool(event, input, JSON.stringify(input))
+  return 'json' in result ? (JSON.parse(result.json.toString('utf8')) as AnalysisOutput) : result
+}
+
+/** A 422 from the analysis (bad geometry, a section torsion refuses, a solve over its time limit). */
+function isGeometryError(error: unknown): boolean {
+  return (error as { statusCode?: number } | null)?.statusCode === 422
 }

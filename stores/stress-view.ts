@@ -1,14 +1,16 @@
-import type { AnalysisResponse } from '#shared/analysis/contract'
+import { defineStore } from 'pinia'
+import { computed, ref, shallowRef, toRaw, watch, markRaw } from 'vue'
 import { loadSetsFor, withLoadAt } from '#shared/loads/combine'
 import type { PointLoad } from '#shared/mechanics/types'
 import { slenderness } from '#shared/mechanics/slenderness'
-import type { SketchDocument } from '#shared/sketch/document'
 import { checkUtilisation } from '#shared/stress/check'
 import { evaluateFrame, type FrameRegion } from '#shared/stress/frame'
 import { displayUnits, stressScale } from '#shared/stress/scale'
 import { regionsHull } from '#shared/geometry/hull'
 import { kernPolygon } from '#shared/mechanics/kern'
 import type { Ring } from '#shared/geometry/types'
+import { useDisplayStore } from './display'
+import { useSketchStore } from './sketch'
 
 /** A material region of the view: FrameRegion plus the limits of its check (MPa). */
 export interface ViewRegion extends FrameRegion {
@@ -26,17 +28,18 @@ export interface CutLine {
 }
 
 /**
- * The live stress view: derived on every drag frame from the last analysis (properties, hull, core,
+ * The live stress view of the open sketch, shared by the canvas layer and every stress panel (a
+ * drag seen on the canvas is seen in the panels in the same frame): derived on every drag frame from the last analysis (properties, hull, core,
  * regions) and the document's loads, with the dragged load's position applied locally. Nothing here
  * waits for the server; the drag result goes to the store only at the end (`endDrag`).
  */
-export function createStressView(source?: { analysis?: () => AnalysisResponse | null; doc?: () => SketchDocument }) {
-  const analysisState = source?.analysis ? null : useAnalysis()
-  const store = source?.doc ? null : useSketchStore()
-  const analysis = computed(() => (source?.analysis ? source.analysis() : analysisState!.value.result))
+export const useStressViewStore = defineStore('stressView', () => {
+  const display = useDisplayStore()
+  const store = useSketchStore()
+  const analysis = computed(() => display.shown.result)
   /** The last answer was an error (bad geometry): the stresses of the answer before it no longer apply. */
-  const invalid = computed(() => (analysisState ? analysisState.value.error : null))
-  const doc = computed(() => toRaw(source?.doc ? source.doc() : store!.doc))
+  const invalid = computed(() => display.shown.error)
+  const doc = computed(() => toRaw(store.doc))
 
   /** The load being dragged and where it is now (mm), or null. */
   const drag = shallowRef<{ id: string; x: number; y: number } | null>(null)
@@ -164,21 +167,20 @@ export function createStressView(source?: { analysis?: () => AnalysisResponse | 
     return d
   }
 
-  return { analysis, invalid, doc, section, show, units, noTension, sets, frame, settled, scale, shownIds, loads, checks, slender, drag, snap, envelopeSide, cut, cutMode, setDrag, endDrag }
-}
-
-/** The live stress view state. */
-export type StressView = ReturnType<typeof createStressView>
-
-/**
- * The one stress view of the open sketch, shared by the canvas layer and every stress panel (so a
- * drag seen on the canvas is seen in the panels in the same frame). Lives as long as the app.
- */
-export function useStressView(): StressView {
-  const app = useNuxtApp() as unknown as { _kwStressView?: StressView }
-  if (!app._kwStressView) {
-    const scope = effectScope(true)
-    app._kwStressView = scope.run(() => createStressView())!
+  /** Forgets the last sketch's drag, cut line, cut mode, envelope side and drag direction. */
+  function reset(): void {
+    drag.value = null
+    snap.value = null
+    envelopeSide.value = 'compression'
+    cut.value = null
+    cutMode.value = false
+    lastDir = [1, 0]
+    scratch.clear()
   }
-  return app._kwStressView
-}
+  watch(() => store.meta?.id, reset, { flush: 'sync' })
+
+  return { analysis, invalid, doc, section, show, units, noTension, sets, frame, settled, scale, shownIds, loads, checks, slender, drag, snap, envelopeSide, cut, cutMode, setDrag, endDrag, reset }
+})
+
+/** The live stress view state, as its readers see it (refs unwrapped). */
+export type StressView = ReturnType<typeof useStressViewStore>

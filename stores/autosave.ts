@@ -1,4 +1,8 @@
+import { defineStore } from 'pinia'
+import { computed, ref, watch } from 'vue'
 import type { SketchFull } from '#shared/sketch/api'
+import { errorMessage, errorStatus } from '#shared/utils/errors'
+import { useSketchStore } from './sketch'
 
 /** Save state shown by the indicator. */
 export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error'
@@ -6,9 +10,11 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error'
 /**
  * Autosaves the open sketch: a debounced PATCH carrying the version it edited, with the document
  * and any changed title. On 409 (saved elsewhere meanwhile) it stops and offers `reloadTheirs()`
- * or `keepMineAsCopy()`; nothing is overwritten or dropped silently.
+ * or `keepMineAsCopy()`; nothing is overwritten or dropped silently. The editor page `start()`s it
+ * when it opens and `stop()`s it when it leaves, which saves what is not saved yet.
  */
-export function useAutosave(delayMs = 800) {
+export const useAutosaveStore = defineStore('autosave', () => {
+  const delayMs = 800
   const sketch = useSketchStore()
   // A reader (view or comment share) explores without saving.
   const access = useAccessStore()
@@ -19,17 +25,20 @@ export function useAutosave(delayMs = 800) {
   let timer: ReturnType<typeof setTimeout> | null = null
   let saving: Promise<void> | null = null
   /**
-   * The sketch this autosave writes and the version it last saw, kept here and not read back from
-   * the store: a save still under way when the editor is left (or another sketch is opened) must
-   * finish against its own sketch, and must not give the next sketch its version.
+   * The sketch this autosave writes now, and the version last seen of every sketch it wrote, kept
+   * here and not read back from the sketch store: a save still under way when the editor is left
+   * (or another sketch is opened) finishes against its own sketch and its own version, and does not
+   * give the next sketch its version or its save state.
    */
-  const target = { id: sketch.meta?.id ?? '', version: sketch.meta?.version ?? 0 }
+  const target = { id: sketch.meta?.id ?? '' }
+  const versions = new Map<string, number>()
+  if (sketch.meta) versions.set(sketch.meta.id, sketch.meta.version)
 
   const dirty = computed(() => sketch.revision !== savedRevision.value || (sketch.meta?.title ?? '') !== savedTitle.value)
 
   /** The state to save, taken at once (the store replaces the document on every edit, so this is a snapshot). */
   function snapshot() {
-    return { doc: sketch.doc, title: sketch.meta?.title ?? '', revision: sketch.revision, mine: sketch.meta?.id === target.id }
+    return { id: target.id, doc: sketch.doc, title: sketch.meta?.title ?? '', savedTitle: savedTitle.value, revision: sketch.revision, mine: sketch.meta?.id === target.id }
   }
 
   async function save(): Promise<void> {
@@ -39,22 +48,25 @@ export function useAutosave(delayMs = 800) {
 
   /** Saves one snapshot after any save under way (one PATCH at a time, each with the version the last one got). */
   async function send(snap: ReturnType<typeof snapshot>): Promise<void> {
-    if (!snap.mine || !target.id || !access.canEdit) return
+    if (!snap.mine || !snap.id || !access.canEdit) return
     while (saving) await saving
-    if (status.value === 'conflict') return
-    status.value = 'saving'
+    const current = () => target.id === snap.id
+    if (current() && status.value === 'conflict') return
+    if (current()) status.value = 'saving'
     saving = (async () => {
       try {
-        const body: Record<string, unknown> = { version: target.version, document: snap.doc }
-        if (snap.title !== savedTitle.value && snap.title.trim()) body.title = snap.title
-        const saved = await $fetch<SketchFull>(`/api/sketches/${target.id}`, { method: 'PATCH', body })
-        target.version = saved.version
+        const body: Record<string, unknown> = { version: versions.get(snap.id) ?? 0, document: snap.doc }
+        if (snap.title !== snap.savedTitle && snap.title.trim()) body.title = snap.title
+        const saved = await $fetch<SketchFull>(`/api/sketches/${snap.id}`, { method: 'PATCH', body })
+        versions.set(snap.id, saved.version)
+        if (!current()) return
         savedRevision.value = snap.revision
         savedTitle.value = snap.title
-        if (sketch.meta?.id === target.id) sketch.setMeta({ version: saved.version, status: saved.status })
+        if (sketch.meta?.id === snap.id) sketch.setMeta({ version: saved.version, status: saved.status })
         message.value = null
         status.value = dirty.value ? 'unsaved' : 'saved'
       } catch (e) {
+        if (!current()) return
         status.value = errorStatus(e) === 409 ? 'conflict' : 'error'
         message.value = errorMessage(e)
       } finally {
@@ -62,7 +74,7 @@ export function useAutosave(delayMs = 800) {
       }
     })()
     await saving
-    if (status.value === 'unsaved' && sketch.meta?.id === target.id) schedule()
+    if (current() && status.value === 'unsaved' && running.value && sketch.meta?.id === snap.id) schedule()
   }
 
   function schedule(): void {
@@ -78,51 +90,62 @@ export function useAutosave(delayMs = 800) {
     if (!meta) return
     const fresh = await $fetch<SketchFull>(`/api/sketches/${meta.id}`)
     sketch.load(fresh)
-    target.version = fresh.version
+    versions.set(fresh.id, fresh.version)
     savedRevision.value = sketch.revision
     savedTitle.value = fresh.title
     status.value = 'saved'
     message.value = null
   }
 
-  /** Saves my version as a new sketch and opens it; the other version stays as it was saved. */
-  async function keepMineAsCopy(): Promise<void> {
+  /** Saves my version as a new sketch; returns its id for the page to open (the other version stays as it was saved). */
+  async function keepMineAsCopy(): Promise<string | null> {
     const meta = sketch.meta
-    if (!meta) return
+    if (!meta) return null
     const copy = await $fetch<SketchFull>('/api/sketches', {
       method: 'POST',
       body: { title: `${meta.title} (my copy)`.slice(0, 160), project: meta.project, description: meta.description, document: sketch.doc },
     })
     status.value = 'saved'
-    await navigateTo(`/sketches/${copy.id}`)
+    return copy.id
   }
 
   /** Called after `sketch.load()`: the loaded state counts as saved. */
   function markLoaded(): void {
     target.id = sketch.meta?.id ?? ''
-    target.version = sketch.meta?.version ?? 0
+    // The newer of the version loaded and the one a save of this sketch already got.
+    if (sketch.meta) versions.set(sketch.meta.id, Math.max(sketch.meta.version, versions.get(sketch.meta.id) ?? 0))
     savedRevision.value = sketch.revision
     savedTitle.value = sketch.meta?.title ?? ''
     status.value = 'saved'
     message.value = null
   }
 
-  watch(() => [sketch.revision, sketch.meta?.title], schedule)
+  const running = ref(false)
+  watch(() => [sketch.revision, sketch.meta?.title], () => { if (running.value) schedule() })
 
   function beforeUnload(e: BeforeUnloadEvent): void {
     if (dirty.value && access.canEdit) e.preventDefault()
   }
-  onMounted(() => window.addEventListener('beforeunload', beforeUnload))
-  onBeforeUnmount(() => {
-    window.removeEventListener('beforeunload', beforeUnload)
-    // Leaving the editor saves what is not saved yet, now, as a snapshot: not only when a save was
-    // scheduled (a change committed while leaving has no timer yet) and after any save under way.
-    if (timer) { clearTimeout(timer); timer = null }
-    if (dirty.value && status.value !== 'conflict') void send(snapshot())
-  })
 
-  return { status, message, dirty, save, reloadTheirs, keepMineAsCopy, markLoaded }
-}
+  /** Starts saving the open sketch's changes (the editor page, once mounted). */
+  function start(): void {
+    running.value = true
+    window.addEventListener('beforeunload', beforeUnload)
+  }
+
+  /**
+   * Stops, saving what is not saved yet, now, as a snapshot: not only when a save was scheduled (a
+   * change committed while leaving has no timer yet), and after any save under way.
+   */
+  function stop(): Promise<void> {
+    running.value = false
+    window.removeEventListener('beforeunload', beforeUnload)
+    if (timer) { clearTimeout(timer); timer = null }
+    return dirty.value && status.value !== 'conflict' ? send(snapshot()) : Promise.resolve()
+  }
+
+  return { status, message, dirty, running, save, reloadTheirs, keepMineAsCopy, markLoaded, start, stop }
+})
 
 /** The open sketch's autosave, as the editor page and the save indicator share it. */
-export type Autosave = ReturnType<typeof useAutosave>
+export type Autosave = ReturnType<typeof useAutosaveStore>

@@ -1,7 +1,12 @@
+import { defineStore } from 'pinia'
+import { ref, watch } from 'vue'
 import type { AnalysisRequestBody } from '#shared/analysis/contract'
 import { analysisRequestFor } from '#shared/editor/analysis-request'
 import type { TorsionResult } from '#shared/mechanics/torsion/analysis'
 import type { TorsionMeshDensity } from '#shared/mechanics/torsion/types'
+import { errorMessage } from '#shared/utils/errors'
+import { useDisplayStore } from './display'
+import { useSketchStore } from './sketch'
 
 /** Torsion of the open sketch: the answer, what was asked, and whether a solve is running. */
 export interface TorsionState {
@@ -20,10 +25,6 @@ export interface TorsionState {
   T: number
 }
 
-/** The torsion state (the panel and the canvas layer read it; `useLiveTorsion` fills it). */
-export function useTorsion() {
-  return useState<TorsionState>('kw-torsion', () => ({ result: null, pending: false, error: null, revision: -1, ms: 0, mesh: 'normal', study: false, showField: false, T: 0 }))
-}
 
 /**
  * Quiet time after the last bending answer before torsion is asked for, so a burst of edits asks
@@ -37,9 +38,10 @@ const SETTLE_MS = 500
  * request is in flight (an aborted fetch would not stop the server's solve): a change made
  * meanwhile is asked for when it returns, and only the answer for the current revision is shown.
  */
-export function useLiveTorsion() {
-  const state = useTorsion()
-  const analysis = useAnalysis()
+export const useTorsionStore = defineStore('torsion', () => {
+  const state = ref<TorsionState>({ result: null, pending: false, error: null, revision: -1, ms: 0, mesh: 'normal', study: false, showField: false, T: 0 })
+  const running = ref(false)
+  const display = useDisplayStore()
   const sketch = useSketchStore()
   let timer: ReturnType<typeof setTimeout> | null = null
   let controller: AbortController | null = null
@@ -84,25 +86,33 @@ export function useLiveTorsion() {
   function schedule(): void {
     if (timer) clearTimeout(timer)
     timer = null
-    const a = analysis.value
     // Only once the bending answer for the committed revision is in.
-    if (a.pending || a.revision !== sketch.revision) return
+    if (!running.value || display.pending) return
     timer = setTimeout(() => { timer = null; void run() }, SETTLE_MS)
   }
 
-  const stopAnswer = watch(() => [analysis.value.revision, analysis.value.pending, analysis.value.result] as const, schedule)
-  const s = state.value
-  const stopAsk = watch(() => [state.value.mesh, state.value.study, state.value.showField, state.value.showField ? state.value.T : 0] as const, schedule)
-  const stopId = watch(() => sketch.meta?.id, () => {
+  watch(() => [display.shown, display.pending] as const, schedule)
+  watch(() => [state.value.mesh, state.value.study, state.value.showField, state.value.showField ? state.value.T : 0] as const, schedule)
+  watch(() => sketch.meta?.id, () => {
     controller?.abort()
     controller = null
     again = false
-    state.value = { ...state.value, result: null, pending: false, error: null, revision: -1, T: 0, study: false, showField: false, mesh: s.mesh }
+    state.value = { ...state.value, result: null, pending: false, error: null, revision: -1, T: 0, study: false, showField: false, mesh: state.value.mesh }
   })
-  onScopeDispose(() => {
-    stopAnswer(); stopAsk(); stopId()
+  /** Starts asking for torsion after each live answer (the editor page). */
+  function start(): void {
+    running.value = true
+    schedule()
+  }
+
+  /** Stops asking; a solve under way is abandoned. */
+  function stop(): void {
+    running.value = false
     if (timer) clearTimeout(timer)
+    timer = null
     controller?.abort()
-  })
-  return state
-}
+    controller = null
+  }
+
+  return { state, running, start, stop }
+})

@@ -1,5 +1,11 @@
-import type { Ring } from '#shared/geometry/types'
-import type { FieldGradient } from '#shared/stress/field'
+import type { Ring } from '../geometry/types'
+import type { FieldGradient } from './field'
+
+/**
+ * The 2D drawing calls the stress overlay makes: a browser canvas context and Konva's context
+ * wrapper (what a Konva sceneFunc receives) both provide them.
+ */
+export type Paint2D = Pick<CanvasRenderingContext2D, 'arc' | 'beginPath' | 'clip' | 'closePath' | 'createLinearGradient' | 'fill' | 'fillStyle' | 'fillText' | 'font' | 'lineJoin' | 'lineTo' | 'lineWidth' | 'moveTo' | 'restore' | 'save' | 'setLineDash' | 'setTransform' | 'stroke' | 'strokeStyle' | 'strokeText' | 'textAlign'>
 
 /** Ink colour of the stress overlay's lines and labels (Tailwind ink-900). */
 export const STRESS_INK = '#161b23'
@@ -56,7 +62,7 @@ export function emptyScene(): StressScene {
 /** The world→screen affine map [a, b, c, d, e, f] of Konva (sx = a·x + c·y + e, sy = b·x + d·y + f). */
 type Matrix = readonly number[]
 
-function path(ctx: CanvasRenderingContext2D | Path2D, m: Matrix, rings: readonly Ring[]): void {
+function path(ctx: Paint2D | Path2D, m: Matrix, rings: readonly Ring[]): void {
   const [a, b, c, d, e, f] = m as [number, number, number, number, number, number]
   for (const ring of rings) {
     if (ring.length === 0) continue
@@ -85,7 +91,7 @@ function cachedPath(m: Matrix, rings: readonly Ring[], owner: object = rings): P
   return p
 }
 
-function flatPath(ctx: CanvasRenderingContext2D, m: Matrix, rings: readonly number[][]): void {
+function flatPath(ctx: Paint2D, m: Matrix, rings: readonly number[][]): void {
   const [a, b, c, d, e, f] = m as [number, number, number, number, number, number]
   for (const r of rings) {
     ctx.moveTo(a * r[0]! + c * r[1]! + e, b * r[0]! + d * r[1]! + f)
@@ -94,7 +100,7 @@ function flatPath(ctx: CanvasRenderingContext2D, m: Matrix, rings: readonly numb
   }
 }
 
-function segments(ctx: CanvasRenderingContext2D, m: Matrix, segs: readonly number[]): void {
+function segments(ctx: Paint2D, m: Matrix, segs: readonly number[]): void {
   const [a, b, c, d, e, f] = m as [number, number, number, number, number, number]
   for (let i = 0; i + 3 < segs.length; i += 4) {
     ctx.moveTo(a * segs[i]! + c * segs[i + 1]! + e, b * segs[i]! + d * segs[i + 1]! + f)
@@ -106,7 +112,7 @@ function segments(ctx: CanvasRenderingContext2D, m: Matrix, segs: readonly numbe
  * Paints a scene on a native 2D context whose transform is the device pixel ratio only, mapping
  * model points with the stage matrix `m`: lines keep their pixel width and text stays upright.
  */
-export function paintScene(ctx: CanvasRenderingContext2D, m: Matrix, s: StressScene): void {
+export function paintScene(ctx: Paint2D, m: Matrix, s: StressScene): void {
   const [a, b, c, d, e, f] = m as [number, number, number, number, number, number]
   const X = (x: number, y: number) => a * x + c * y + e
   const Y = (x: number, y: number) => b * x + d * y + f
