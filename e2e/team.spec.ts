@@ -66,6 +66,10 @@ test('engineer shares and submits; the checker pins a comment and returns it; th
   // Text stays text: the tags are shown, not applied.
   await expect(thread.getByTestId('comment-text')).toHaveText('Weld <b>size</b>? Show it on the drawing.')
   await expect(thread.getByLabel('Marker 1')).toBeVisible()
+  // The pin is where the click was, in section coordinates (within a few mm of the click's point).
+  const listed = await (await checker.request.get(`/api/sketches/${id}/comments`)).json() as { comments: { at: { x: number; y: number } | null }[] }
+  expect(Math.abs(listed.comments[0]!.at!.x - 60)).toBeLessThan(3)
+  expect(Math.abs(listed.comments[0]!.at!.y - 10)).toBeLessThan(3)
   await shot(checker, 'team-3-checker-comment-pinned')
   await openTeam(checker, 'review')
   await checker.getByTestId('review-return-comment').fill('Show the weld size, then resubmit.')
