@@ -95,7 +95,7 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     const taken = stressGesture(w)
     if (taken) { gesture.value = taken; return }
     // A reader (view or comment share) pans and drags loads to explore; the parts stay as drawn.
-    if (!useAccessStore().canEdit) return
+    if (useAccessStore().readOnly) return
     // A touch on the phone view explores loads only: it never edits the drawing.
     if (e.pointerType === 'touch' && selection.tool === 'pick' && window.matchMedia?.('(max-width: 640px)').matches) return
     const tol = HIT_PX / view.zoom

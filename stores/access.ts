@@ -1,4 +1,5 @@
 import { defineStore } from 'pinia'
+import { computed, ref } from 'vue'
 import { allows, type AccessLevel } from '#shared/team/access'
 
 /** What the API says about the open sketch beside its document: my access and its review. */
@@ -26,6 +27,8 @@ export const useAccessStore = defineStore('access', () => {
   const canEdit = computed(() => allows(access.value, 'edit'))
   const canComment = computed(() => allows(access.value, 'comment'))
   const canManage = computed(() => allows(access.value, 'manage'))
+  /** True once the open sketch is known to be shared with me for reading only (false while nothing is loaded). */
+  const readOnly = computed(() => info.value !== null && !canEdit.value)
 
   /** Takes the access fields of a sketch as GET /api/sketches/:id answers it. */
   function set(s: SketchAccessInfo): void {
@@ -45,5 +48,5 @@ export const useAccessStore = defineStore('access', () => {
     info.value = null
   }
 
-  return { info, access, canEdit, canComment, canManage, set, refresh, reset }
+  return { info, access, canEdit, canComment, canManage, readOnly, set, refresh, reset }
 })

@@ -1,4 +1,5 @@
 import { defineStore } from 'pinia'
+import { computed, ref } from 'vue'
 
 /** A comment as GET /api/sketches/:id/comments lists it (`at` in section coordinates, mm). */
 export interface TeamComment {
