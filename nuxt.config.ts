@@ -42,6 +42,9 @@ export default defineNuxtConfig({
     // every mail is only recorded in the outbox table. NUXT_MAIL_FROM is the sender.
     smtpUrl: '',
     mailFrom: 'Kernwise <kernwise@localhost>',
+    // NUXT_REGISTRATION_DEFAULT=open: registration stays open until an admin chooses (test
+    // servers); empty: invitation only once the workspace has an admin (server/utils/registration.ts).
+    registrationDefault: '',
     // The analysis worker pool (NUXT_ANALYSIS_WORKERS, _QUEUE, _PER_ACCOUNT, _TIMEOUT_MS,
     // _INLINE_VERTICES); 0: the default (server/utils/analysis-pool.ts).
     analysis: { workers: 0, queue: 0, perAccount: 0, timeoutMs: 0, inlineVertices: 0 },

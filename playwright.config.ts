@@ -36,6 +36,8 @@ export default defineConfig({
       NUXT_DB_PATH: join(dbDir, 'e2e.sqlite'),
       NUXT_SEED_DEMO: 'true',
       NUXT_SESSION_PASSWORD: 'e2e-only-session-password-0123456789abcdef',
+      // Browser tests register new accounts beside the seeded admin.
+      NUXT_REGISTRATION_DEFAULT: 'open',
     },
   },
 })

@@ -9,7 +9,7 @@ const alias = {
 
 // The API tests that do not reach into the SQLite file themselves, run again on PostgreSQL by
 // .ci/run (KERNWISE_TEST_PG set), with the two-instance test.
-const onPostgres = ['auth', 'roles-tokens', 'sketches', 'analysis', 'analysis-checker', 'analysis-pool', 'sign-in-limits', 'requests', 'transport', 'fuzz']
+const onPostgres = ['auth', 'roles-tokens', 'sketches', 'team', 'review', 'registration', 'access-matrix', 'analysis', 'analysis-checker', 'analysis-pool', 'sign-in-limits', 'requests', 'transport', 'fuzz']
 const postgres = process.env.KERNWISE_TEST_PG
   ? [{
       resolve: { alias },

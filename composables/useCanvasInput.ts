@@ -94,6 +94,8 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     box.value!.setPointerCapture(e.pointerId)
     const taken = stressGesture(w)
     if (taken) { gesture.value = taken; return }
+    // A reader (view or comment share) pans and drags loads to explore; the parts stay as drawn.
+    if (useAccessStore().readOnly) return
     // A touch on the phone view explores loads only: it never edits the drawing.
     if (e.pointerType === 'touch' && selection.tool === 'pick' && window.matchMedia?.('(max-width: 640px)').matches) return
     const tol = HIT_PX / view.zoom

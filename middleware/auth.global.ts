@@ -8,6 +8,8 @@ const PUBLIC = new Set(['/sign-in', '/register', '/forgot-password', '/reset-pas
  * spares people a page they cannot use.
  */
 export default defineNuxtRouteMiddleware(async (to) => {
+  // A read-only link (/l/<token>) opens for anyone, signed in or not; the token is the access.
+  if (to.path.startsWith('/l/')) return
   const { loggedIn, user, fetch } = useUserSession()
   if (import.meta.client && !loggedIn.value) await fetch()
   if (PUBLIC.has(to.path)) {

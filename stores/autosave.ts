@@ -2,6 +2,7 @@ import { defineStore } from 'pinia'
 import { computed, ref, watch } from 'vue'
 import type { SketchFull } from '#shared/sketch/api'
 import { errorMessage, errorStatus } from '#shared/utils/errors'
+import { useAccessStore } from './access'
 import { useSketchStore } from './sketch'
 
 /** Save state shown by the indicator. */
@@ -16,6 +17,8 @@ export type SaveStatus = 'saved' | 'unsaved' | 'saving' | 'conflict' | 'error'
 export const useAutosaveStore = defineStore('autosave', () => {
   const delayMs = 800
   const sketch = useSketchStore()
+  // A reader (view or comment share) explores without saving.
+  const access = useAccessStore()
   const status = ref<SaveStatus>('saved')
   const message = ref<string | null>(null)
   const savedRevision = ref(sketch.revision)
@@ -46,7 +49,7 @@ export const useAutosaveStore = defineStore('autosave', () => {
 
   /** Saves one snapshot after any save under way (one PATCH at a time, each with the version the last one got). */
   async function send(snap: ReturnType<typeof snapshot>): Promise<void> {
-    if (!snap.mine || !snap.id) return
+    if (!snap.mine || !snap.id || access.readOnly) return
     while (saving) await saving
     const current = () => target.id === snap.id
     if (current() && status.value === 'conflict') return
@@ -76,7 +79,7 @@ export const useAutosaveStore = defineStore('autosave', () => {
   }
 
   function schedule(): void {
-    if (status.value === 'conflict') return
+    if (status.value === 'conflict' || access.readOnly) return
     status.value = dirty.value ? 'unsaved' : 'saved'
     if (timer) clearTimeout(timer)
     if (dirty.value) timer = setTimeout(() => { timer = null; void save() }, delayMs)
@@ -122,7 +125,7 @@ export const useAutosaveStore = defineStore('autosave', () => {
   watch(() => [sketch.revision, sketch.meta?.title], () => { if (running.value) schedule() })
 
   function beforeUnload(e: BeforeUnloadEvent): void {
-    if (dirty.value) e.preventDefault()
+    if (dirty.value && !access.readOnly) e.preventDefault()
   }
 
   /** Starts saving the open sketch's changes (the editor page, once mounted). */

@@ -34,7 +34,7 @@ export default defineEventHandler(async (event): Promise<ImportResult> => {
     else if (f.name && f.name !== 'file') fields[f.name] = f.data.toString('utf8').slice(0, 200)
   }
   const opts = parseOr400(ImportFields, fields)
-  if (opts.sketchId) await findOwnSketch(event, user, opts.sketchId)
+  if (opts.sketchId) await requireSketchAccess(event, opts.sketchId, 'edit')
   let bytes: Uint8Array
   let name = file?.filename?.slice(0, 200) || 'import'
   if (file) {

@@ -1,6 +1,7 @@
 import type { Db } from '../models'
 import type { Role } from '../../shared/auth/roles'
 import { demoSketches } from './demo-sketches'
+import { seedDemoTeam } from './demo-team'
 
 /** The demo password of every demo account (README: change it, or reset, before real use). */
 export const DEMO_PASSWORD = 'millrace-demo-2026'
@@ -30,6 +31,7 @@ export async function seedDemo(db: Db, hash: Hasher): Promise<void> {
   const passwordHash = await hash(DEMO_PASSWORD)
   await db.sequelize.transaction(async (transaction) => {
     const ids: Record<string, string> = {}
+    const emails: Record<string, string> = {}
     for (const account of DEMO_ACCOUNTS) {
       const [user] = await db.User.findOrCreate({
         where: { email: account.email },
@@ -38,12 +40,16 @@ export async function seedDemo(db: Db, hash: Hasher): Promise<void> {
       })
       await user.update({ name: account.name, role: account.role, passwordHash }, { transaction })
       ids[account.role] = user.id
+      emails[account.role] = user.email
     }
     const ownerId = ids.engineer!
     const sketches = demoSketches()
     await db.Sketch.destroy({ where: { ownerId, title: sketches.map(s => s.title) }, transaction })
+    const made = new Map<string, Awaited<ReturnType<typeof db.Sketch.create>>>()
     for (const sketch of sketches) {
-      await db.Sketch.create({ ...sketch, ownerId, document: JSON.stringify(sketch.document) }, { transaction })
+      // Drafts here; the team seed sets the review state of the sketches it submits or approves.
+      made.set(sketch.title, await db.Sketch.create({ ...sketch, status: 'draft', ownerId, document: JSON.stringify(sketch.document) }, { transaction }))
     }
+    await seedDemoTeam(db, ids, made, emails, transaction)
   })
 }

@@ -8,6 +8,8 @@ export class OutboxMail extends Model<InferAttributes<OutboxMail>, InferCreation
   declare to: string
   declare subject: string
   declare text: string
+  /** The HTML part (null for mails recorded before it existed). */
+  declare html: CreationOptional<string | null>
   /** When the SMTP server took it; null when only recorded (no SMTP configured) or it failed. */
   declare sentAt: Date | null
   declare error: string | null
@@ -23,6 +25,7 @@ export function initOutboxMail(sequelize: Sequelize): typeof OutboxMail {
       to: { type: DataTypes.STRING(254), allowNull: false },
       subject: { type: DataTypes.STRING(200), allowNull: false },
       text: { type: DataTypes.TEXT, allowNull: false },
+      html: { type: DataTypes.TEXT, allowNull: true },
       sentAt: { type: DataTypes.DATE, allowNull: true },
       error: { type: DataTypes.STRING(500), allowNull: true },
       createdAt: DataTypes.DATE,

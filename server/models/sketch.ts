@@ -14,6 +14,10 @@ export class Sketch extends Model<InferAttributes<Sketch>, InferCreationAttribut
   /** Incremented on every save; a PATCH must carry the version it edited. */
   declare version: CreationOptional<number>
   declare deletedAt: Date | null
+  /** The checker named by the last submission (null before any). */
+  declare checkerId: CreationOptional<string | null>
+  /** The revision number the last submission named. */
+  declare reviewRevision: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -30,6 +34,8 @@ export function initSketch(sequelize: Sequelize): typeof Sketch {
       document: { type: DataTypes.TEXT, allowNull: false },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       deletedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      checkerId: { type: DataTypes.UUID, allowNull: true, defaultValue: null },
+      reviewRevision: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -22,6 +22,8 @@ export const RegisterBody = z.object({
   email: Email,
   password: NewPassword,
   name: z.string({ error: 'Enter your name' }).trim().min(1, 'Enter your name').max(120, 'A name has at most 120 characters'),
+  /** The token of an invitation link (needed when registration is by invitation only). */
+  invitation: z.string({ error: 'The invitation link is incomplete: open it from the mail again' }).max(100, 'The invitation link is incomplete: open it from the mail again').optional(),
 })
 
 export const LoginBody = z.object({

@@ -37,6 +37,8 @@ export const ListSketchesQuery = z.object({
   deleted: z.enum(['true', 'false'], { error: 'deleted is true or false' }).optional(),
   sort: z.enum(['updated', 'created', 'title', 'project'], { error: 'sort is one of: updated, created, title, project' }).default('updated'),
   order: z.enum(['asc', 'desc'], { error: 'order is asc or desc' }).optional(),
+  /** mine: what I own; shared: what others share with me; review: what waits for my check. */
+  scope: z.enum(['mine', 'shared', 'review'], { error: 'scope must be mine, shared or review' }).default('mine'),
 })
 
 /** A sketch as the API returns it. */

@@ -115,12 +115,32 @@ describe('GET /api/sketches/:id/report.pdf', () => {
     expect(page).toContain('Mesh study: density')
     expect(page!.replace(/\s+/g, ' ')).toContain('Neglected: warping torsion along the member')
   })
-  it('revisions do not exist yet: ?revision=N answers 404, a bad revision or paper 400', async () => {
+
+  it('?revision=N of a revision that does not exist answers 404, a bad revision or paper 400', async () => {
     const r = await owner.get(`/api/sketches/${id}/report.pdf?revision=3`)
     expect(r.status).toBe(404)
-    expect(r.body.message).toMatch(/no revisions yet/)
+    expect(r.body.message).toMatch(/Revision 3 does not exist/)
     expect((await owner.get(`/api/sketches/${id}/report.pdf?revision=abc`)).status).toBe(400)
     expect((await owner.get(`/api/sketches/${id}/report.pdf?paper=A3`)).body.message).toMatch(/A4 or Letter/)
+  })
+
+  it('?revision=N of an approved revision names who approved it and when, and is no longer "not checked"; the working state still is', async () => {
+    // The owner registered first, so is the admin, and makes `other` a checker.
+    const members = (await owner.get('/api/members')).body.members as { id: string; email: string }[]
+    await owner.patch(`/api/members/${members.find(m => m.email === 'other@report.test')!.id}`, { role: 'checker' })
+    const sheet = (await owner.post('/api/sketches', { title: 'Checked plate', project: 'Millrace', document: plateDoc })).body.id
+    expect((await owner.post(`/api/sketches/${sheet}/revisions`, { note: 'For check' })).body.number).toBe(1)
+    expect((await owner.post(`/api/sketches/${sheet}/review`, { revision: 1, checker: 'other@report.test' })).status).toBe(201)
+    const submitted = (await pdfPages(`/api/sketches/${sheet}/report.pdf?revision=1`)).text.join('\n')
+    expect(submitted).toContain('NOT CHECKED')
+    expect((await other.post(`/api/sketches/${sheet}/review/approve`)).status).toBe(200)
+    const approved = (await pdfPages(`/api/sketches/${sheet}/report.pdf?revision=1`)).text
+    const all = approved.join('\n')
+    expect(all).toContain('Other')
+    expect(all).toContain(new Date().toISOString().slice(0, 10))
+    approved.forEach(page => expect(page).not.toContain('NOT CHECKED'))
+    // The checker reads the sheet too (comment access came with the submission).
+    expect((await other.get(`/api/sketches/${sheet}/report.pdf?revision=1`)).status).toBe(200)
   })
 
   it("someone else's sketch answers 404, signed out 401", async () => {

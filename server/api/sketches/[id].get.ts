@@ -1,8 +1,8 @@
 import { IdParams } from '../../../shared/auth/schemas'
 
-/** One of my sketches, with its document. */
+/** One sketch I have access to, with its document, my access, the review and the approval. */
 export default defineEventHandler(async (event) => {
-  const user = await requireUser(event)
   const { id } = await paramsAs(event, IdParams)
-  return sketchJson(await findOwnSketch(event, user, id), true)
+  const { sketch, access, user } = await requireSketchAccess(event, id, 'view')
+  return sketchDetail(sketch, access, user)
 })

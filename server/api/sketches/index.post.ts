@@ -13,6 +13,7 @@ export default defineEventHandler(async (event) => {
     description: body.description,
     document: JSON.stringify(body.document ?? emptyDocument()),
   })
+  await recordActivity(sketch.id, user.id, 'created')
   setResponseStatus(event, 201)
   return sketchJson(sketch, true)
 })

@@ -32,6 +32,8 @@ export function useTestServer(env: Record<string, string> = {}): TestServer {
       ...(database ? { NUXT_DATABASE_URL: database } : {}),
       NUXT_SESSION_PASSWORD: 'test-only-session-password-0123456789abcdef',
       NUXT_SEED_DEMO: 'false',
+      // Tests register several accounts freely; tests/api/registration.test.ts covers the real default.
+      NUXT_REGISTRATION_DEFAULT: 'open',
       ...env,
     })
     child = started.child

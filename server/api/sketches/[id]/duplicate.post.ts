@@ -1,10 +1,10 @@
 import { IdParams } from '../../../../shared/auth/schemas'
 
-/** Copies one of my sketches into a new draft ("… (copy)"). */
+/** Copies a sketch I can read into a new draft of mine ("… (copy)"); my role must allow editing sketches. */
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'editSketches')
   const { id } = await paramsAs(event, IdParams)
-  const source = await findOwnSketch(event, user, id)
+  const { sketch: source, user } = await requireSketchAccess(event, id, 'view')
+  await requireRole(event, 'editSketches')
   const db = await useDb()
   const copy = await db.Sketch.create({
     ownerId: user.id,
@@ -13,6 +13,7 @@ export default defineEventHandler(async (event) => {
     description: source.description,
     document: source.document,
   })
+  await recordActivity(copy.id, user.id, 'created', `copied from “${source.title}”`)
   setResponseStatus(event, 201)
   return sketchJson(copy, true)
 })

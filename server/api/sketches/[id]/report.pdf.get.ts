@@ -6,18 +6,17 @@ import type { AnalysisOutput } from '../../../../shared/mechanics/analyze'
 import { renderCalculationSheet } from '../../../utils/report/sheet'
 
 /**
- * The calculation sheet of one of my sketches as a PDF (A4 or US Letter): the working state,
- * marked "not checked" on every page. `?revision=N` answers 404 until revisions exist.
+ * The calculation sheet of a sketch I can read as a PDF (A4 or US Letter): the working state,
+ * marked "not checked" on every page, or with `?revision=N` that revision (an approved one names
+ * who approved it and when; any other is "not checked").
  */
 export default defineEventHandler(async (event) => {
-  const user = await requireUser(event)
   const { id } = await paramsAs(event, IdParams)
+  const { sketch } = await requireSketchAccess(event, id, 'view')
   const query = await queryAs(event, ReportQuery)
-  const sketch = await findOwnSketch(event, user, id)
-  if (query.revision) {
-    throw createError({ statusCode: 404, message: `Revision ${query.revision} does not exist: sketches have no revisions yet. Leave out ?revision for the working state.` })
-  }
-  const doc = readDocument(sketch.document)
+  const revision = query.revision ? await findRevision(sketch.id, Number(query.revision)) : null
+  const people = await peopleById([sketch.ownerId, revision?.checkerId, revision?.approvedBy])
+  const doc = readDocument(revision ? revision.document : sketch.document)
   let analysis: AnalysisOutput | null = null
   let analysisError: string | null = null
   let torsionError: string | null = null
@@ -46,12 +45,14 @@ export default defineEventHandler(async (event) => {
   ])
   const pdf = await renderCalculationSheet({
     paper: query.paper,
-    workspace: 'Kernwise workspace',
+    workspace: await workspaceName(),
     project: sketch.project,
-    title: sketch.title,
-    engineer: user.name,
-    checker: null,
-    approval: null,
+    title: revision ? revision.title : sketch.title,
+    engineer: people.get(sketch.ownerId)?.name ?? '',
+    checker: revision?.checkerId ? people.get(revision.checkerId)?.name ?? null : null,
+    approval: revision?.status === 'approved'
+      ? { revision: revision.number, approvedBy: people.get(revision.approvedBy!)?.name ?? 'a former member', approvedAt: revision.approvedAt! }
+      : null,
     date: new Date(),
     doc,
     analysis,

@@ -1,10 +1,9 @@
 import { IdParams } from '../../../../shared/auth/schemas'
 
-/** Undoes a delete. */
+/** Undoes a delete (the owner, while the sketch is in the bin). */
 export default defineEventHandler(async (event) => {
-  const user = await requireRole(event, 'editSketches')
   const { id } = await paramsAs(event, IdParams)
-  const sketch = await findOwnSketch(event, user, id, { deleted: true })
+  const { sketch } = await requireSketchAccess(event, id, 'manage', { deleted: true })
   await sketch.update({ deletedAt: null }, { silent: true })
   return sketchJson(sketch, false)
 })
