@@ -6,13 +6,12 @@ const drawn = new Map<string, { version: number; svg: string }>()
 const KEEP = 2000
 
 /**
- * A small drawing of one of my sketches (SVG), for the dashboard. Its ETag is the sketch's
+ * A small drawing of a sketch I can read (SVG), for the dashboard. Its ETag is the sketch's
  * version: a browser that has it asks again with If-None-Match and gets 304 until the next save.
  */
 export default defineEventHandler(async (event) => {
-  const user = await requireUser(event)
   const { id } = await paramsAs(event, IdParams)
-  const sketch = await findOwnSketch(event, user, id)
+  const { sketch } = await requireSketchAccess(event, id, 'view')
   const etag = `"${sketch.id}-v${sketch.version}"`
   setResponseHeaders(event, { 'content-type': 'image/svg+xml; charset=utf-8', 'cache-control': 'private, no-cache', etag })
   if (getRequestHeader(event, 'if-none-match') === etag) {
