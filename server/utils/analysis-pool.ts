@@ -24,6 +24,8 @@ interface Pending {
 
 interface Slot {
   worker: Worker
+  /** The worker has loaded its bundle (its start-up does not count against a job's time limit). */
+  ready: boolean
   busy: Pending | null
   timer: ReturnType<typeof setTimeout> | null
 }
@@ -111,7 +113,7 @@ function release(p: Pending): void {
 }
 
 function spawn(file: string): Slot {
-  const slot: Slot = { worker: new Worker(file), busy: null, timer: null }
+  const slot: Slot = { worker: new Worker(file), ready: false, busy: null, timer: null }
   slot.worker.on('message', (reply: AnalysisReply) => finish(slot, reply))
   slot.worker.on('error', (error) => fail(slot, error))
   slot.worker.on('exit', () => fail(slot, new Error('the analysis worker stopped')))
@@ -138,9 +140,15 @@ function fail(slot: Slot, error: unknown): void {
 }
 
 function finish(slot: Slot, reply: AnalysisReply): void {
+  if ('ready' in reply) {
+    slot.ready = true
+    if (slot.busy && !slot.timer) arm(slot)
+    return
+  }
   const p = slot.busy
   if (!p || p.job.id !== reply.id) return
   if (slot.timer) clearTimeout(slot.timer)
+  slot.timer = null
   slot.busy = null
   release(p)
   if ('json' in reply) p.resolve({ json: Buffer.from(reply.json.buffer, reply.json.byteOffset, reply.json.byteLength) })
@@ -164,13 +172,19 @@ function pump(): void {
     const p = queue.shift()
     if (!p) return
     slot.busy = p
-    slot.timer = setTimeout(() => fail(slot, createError({
-      statusCode: 422,
-      statusMessage: 'Unprocessable Entity',
-      message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
-    })), config!.timeoutMs)
+    // A worker still loading holds the job in its port; the time limit starts once it is ready.
+    if (slot.ready) arm(slot)
     slot.worker.postMessage(p.job, [p.job.body.buffer as ArrayBuffer])
   }
+}
+
+/** Starts the time limit of the slot's job. */
+function arm(slot: Slot): void {
+  slot.timer = setTimeout(() => fail(slot, createError({
+    statusCode: 422,
+    statusMessage: 'Unprocessable Entity',
+    message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
+  })), config!.timeoutMs)
 }
 
 function busy(event: H3Event, message: string): never {
