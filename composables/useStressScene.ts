@@ -154,13 +154,15 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
   })
 
   /**
-   * What labels must stay clear of, in screen px: the legend where it floats, and the dimension
+   * What labels must stay clear of, in screen px: the legend where it floats, the scale bar, and the dimension
    * lines with their values that the parts layer draws 22 px below and right of the drawing.
    */
   function keepOut(): Box[] {
     const out: Box[] = []
     const legend = workspace.legendBox
     if (legend) out.push(legend)
+    // The scale bar in the canvas's bottom left corner (SketchScaleBar: bottom-3 left-3, about 230 × 40 px).
+    out.push({ x: 0, y: viewport.height - 48, w: 240, h: 48 })
     const b = sketch.bounds
     if (!b) return out
     const [x0, y1] = viewport.toScreen(b.minX, b.minY)

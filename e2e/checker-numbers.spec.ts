@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { canvasTransform, dragMouse, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { canvasTransform, dragMouse, open, SAME_ORIGIN, shot, showGroup, signIn } from './support/helpers'
 
 // The numbers a checker signs, as the editor shows them on the demo sketches.
 
@@ -16,6 +16,7 @@ test('Mezzanine post M1: bolt-hole cuts go through plate and flange, connections
   await expect(page.getByTestId('analysis-warnings')).toHaveText(/close a cell/)
   await expect(page.getByTestId('analysis-warnings')).not.toHaveText(/hole|notch|treated/)
   // Channels and plates close the box: every plate-to-channel line is part of a closed cell.
+  await showGroup(page, 'checks')
   await page.getByTestId('shear-vy').fill('100')
   await page.getByTestId('shear-vy').press('Enter')
   const rows = page.getByTestId('shear-row')
@@ -55,9 +56,11 @@ test('a tee of two plates: the weld line carries Vy·Q/I and is halved per line 
   const q = (50000 * 4000 * (190 - yc)) / Ixx
   const shown = Number(await page.getByTestId('shear-q-0').getAttribute('data-value'))
   expect(Math.abs(shown - q) / q).toBeLessThan(1e-9)
+  await showGroup(page, 'checks')
   await page.getByTestId('shear-lines').selectOption('2')
   await expect(page.getByTestId('shear-line-0')).toHaveText(String(Number((q / 2).toPrecision(4))))
   // The plastic modulus of one material is geometric and the panel groups its values.
+  await showGroup(page, 'section')
   await expect(page.getByTestId('prop-group-strength')).toBeVisible()
   await expect(page.getByTestId('plastic-note')).toContainText('geometric')
   await shot(page, 'checker-tee-properties')
@@ -93,6 +96,7 @@ test('Pad footing F4: the peak pressure is checked against the soil\'s bearing s
   await expect(row).toHaveAttribute('data-over', 'true')
   await expect(row).toContainText('over what it can bear')
   await expect(page.getByTestId('analysis-warnings')).toContainText('bearing strength 0.2 MPa')
+  await showGroup(page, 'loads')
   await page.getByTestId('panel-contact').scrollIntoViewIfNeeded()
   await shot(page, 'checker-f4-bearing')
 })

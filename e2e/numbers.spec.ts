@@ -1,6 +1,6 @@
 import { expect, test, type Locator, type Page } from '@playwright/test'
 import { mkdirSync } from 'node:fs'
-import { ARTIFACTS, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { ARTIFACTS, SAME_ORIGIN, open, shot, showGroup, signIn } from './support/helpers'
 
 // Typed numbers (issue 17 item 1, issue 10 §6): every numeric field applies a value or refuses it
 // where the user sees it. Conversion factors from NIST SP 811, Appendix B: 1 in = 25.4 mm,
@@ -56,6 +56,7 @@ test('load, moment, shear and effective length fields apply converted values and
   await signIn(page, 'engineer@millrace.test')
   const id = await newSketch(page, 'Typed numbers', pierDocument())
   await open(page, `/sketches/${id}`)
+  await showGroup(page, 'loads')
   const P = page.getByTestId('load-P-0')
   await expect(P).toHaveValue('100')
 
@@ -106,6 +107,7 @@ test('load, moment, shear and effective length fields apply converted values and
   expect((await stored(page, id)).cases[0].Mx).toBeCloseTo(10 * 4448.2216152605 * 304.8, 3)
 
   // Shear Vy and the effective length use the same parser.
+  await showGroup(page, 'checks')
   const Vy = page.getByTestId('shear-vy')
   await type(Vy, '1,000')
   await expect(Vy).toHaveAttribute('aria-invalid', 'true')
@@ -176,6 +178,7 @@ test('a US-units round trip through the editor: typed in US units, stored in mm 
   await page.getByTestId('units').selectOption('US')
   // 10 mm becomes the nearest 1-2-5 step in inches, 0.5 in (12.7 mm).
   await expect(page.getByTestId('grid-size')).toHaveValue('0.5')
+  await showGroup(page, 'loads')
   const P = page.getByTestId('load-P-0')
   await expect(P).toHaveValue('22.4809')           // 100 kN / 4.4482216152605 kN per kip
   await type(P, '50')                              // kip, the field's own unit
@@ -230,6 +233,7 @@ test('the check lists tension and compression against their own allowables, and 
   Object.assign(doc.parts[0]!.material, { allowableT: 1.5, allowableC: 12 })
   const id = await newSketch(page, 'Two allowables', doc)
   await open(page, `/sketches/${id}`)
+  await showGroup(page, 'checks')
   const row = page.getByTestId('check-row')
   // 2.083 / 1.5 = 1.389 (tension) governs over 10.417 / 12 = 0.868 (compression).
   await expect(row).toHaveAttribute('data-governing', 'tension')
@@ -242,8 +246,9 @@ test('the check lists tension and compression against their own allowables, and 
   // (Iyy = 600·400³/12 = 3.2 × 10⁹ mm⁴); r_u = sqrt(Ixx/A) = 173.2 mm, r_v = sqrt(Iyy/A) = 115.5 mm (closed form).
   await expect(page.getByTestId('torsional-note')).toContainText('Flexural-torsional')
   await type(page.getByTestId('effective-length-u'), '6000')
-  await type(page.getByTestId('effective-length-v'), '3000')
+  // The first length is in (the panel re-rendered) before the second is typed.
   await expect(page.getByTestId('klr-u')).toHaveText('34.6')   // 6000 / 173.2
+  await type(page.getByTestId('effective-length-v'), '3000')
   await expect(page.getByTestId('klr-v')).toHaveText('26')     // 3000 / 115.47 = 25.98
   // Euler load π²·E·I/(KL)² with E = 5000 MPa: u 9 870 kN, v 17 546 kN, so u governs (closed form).
   expect(shownNumber(await page.getByTestId('euler-u').textContent()) / (Math.PI ** 2 * 5000 * 7.2e9 / 6000 ** 2 / 1000)).toBeCloseTo(1, 3)

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { canvasTransform, open, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { SAME_ORIGIN, canvasTransform, open, shot, showGroup, signIn } from './support/helpers'
 
 test('with no load the legend and the tension panel say so; with invalid geometry every stress panel says so', async ({ page }) => {
   await signIn(page, 'engineer@millrace.test')
@@ -15,6 +15,7 @@ test('with no load the legend and the tension panel say so; with invalid geometr
   await expect(page.getByTestId('properties-panel')).toHaveAttribute('data-state', 'ready')
   await expect(page.getByTestId('stress-legend-no-load')).toContainText('No load yet')
   await expect(page.getByTestId('stress-legend')).toHaveCount(0)
+  await showGroup(page, 'loads')
   await expect(page.getByTestId('no-load')).toBeVisible()
   await shot(page, 'papercut-no-load')
   // A bow-tie: the geometry is invalid, and no stress panel shows stresses of the drawing before.
@@ -22,6 +23,7 @@ test('with no load the legend and the tension panel say so; with invalid geometr
   await page.getByTestId('tool-outline').click()
   for (const [x, y] of [[-50, -150], [50, -250], [50, -150], [-50, -250]] as const) await page.mouse.click(at(x, y).x, at(x, y).y)
   await page.keyboard.press('Enter')
+  await showGroup(page, 'section')
   await expect(page.getByTestId('analysis-error')).toBeVisible()
   await expect(page.getByTestId('stress-invalid')).toHaveCount(7) // tension, contact, check, cut line, shear flow, torsion, vertex stresses
   await shot(page, 'papercut-invalid-geometry')

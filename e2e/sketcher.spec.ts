@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { canvasTransform, dragMouse, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { SAME_ORIGIN, canvasTransform, dragMouse, shot, showGroup, signIn } from './support/helpers'
 
 /** Polygon area (shoelace), the test's own computation from the vertex table. */
 function shoelace(pts: [number, number][]): number {
@@ -81,6 +81,7 @@ test('the engineer draws a box, inserts an I section, drags and undoes a vertex 
   await shot(page, 'sketcher-undo')
 
   // 5. Type the corner exactly: x = 200 gives a 200 + 300 wide trapezoid of depth 100.
+  await showGroup(page, 'part')
   await page.getByTestId('vertex-2-x').fill('200')
   await page.getByTestId('vertex-2-x').press('Enter')
   const typed = ((200 + 300) / 2) * 100
@@ -237,6 +238,7 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
 
   // Hollow the remaining 50 × 100 box with a 5 mm wall: 50·100 − 40·90.
   await page.mouse.click(at(-90, 0).x, at(-90, 0).y)
+  await showGroup(page, 'part')
   await page.getByTestId('hollow-wall').fill('5')
   await page.getByTestId('hollow-apply').click()
   await expectArea(page, 50 * 100 - 40 * 90)
@@ -244,6 +246,7 @@ test('join and subtract parts, make a void, hollow a box, switch to US units, zo
   // US units: the same area in square inches (1 in² = 645.16 mm², NIST SP 811).
   await page.getByTestId('units').selectOption('US')
   await expect(page.getByTestId('prop-area')).toContainText(`${Number((1400 / 645.16).toPrecision(4))} in²`)
+  await showGroup(page, 'section')
   await page.getByTestId('material-preset').selectOption('aluminium')
   await expect(page.getByTestId('material-source')).toContainText('EN 1999-1-1')
   await shot(page, 'sketcher-hollow-us')

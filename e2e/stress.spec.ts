@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, shot, signIn, SAME_ORIGIN } from './support/helpers'
+import { open, shot, showGroup, signIn, SAME_ORIGIN } from './support/helpers'
 
 // A b × h rectangle centred on the origin, b along x. Values the test computes itself:
 // A = b·h; core edge on the x axis at b/6 (middle third rule, README "Method");
@@ -33,6 +33,7 @@ async function newSketch(page: Page, title: string, document: unknown): Promise<
 /** Opens a sketch in the editor, whose canvas carries the stress overlay and whose panels show it. */
 async function openStress(page: Page, id: string): Promise<void> {
   await open(page, `/sketches/${id}`)
+  await showGroup(page, 'loads')
   await expect(page.getByTestId('tension-panel')).toBeVisible()
 }
 

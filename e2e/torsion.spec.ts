@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { open, SAME_ORIGIN, shot, signIn } from './support/helpers'
+import { open, SAME_ORIGIN, shot, showGroup, signIn } from './support/helpers'
 
 // A thin channel: web mid-line on x = 0, flange mid-lines at y = ±h/2, tips at x = b, all t thick.
 // Shear centre at e = 3b²/(h + 6b) behind the web (thin-walled closed form, equal thicknesses).
@@ -37,6 +37,7 @@ test('the torsion panel shows J, Cw, the shear centre of a channel where the clo
   expect(Math.abs(J - thin) / thin).toBeLessThan(0.1)
   await expect(page.getByTestId('torsion-Cw')).toContainText('⁶')
 
+  await showGroup(page, 'checks')
   await page.getByTestId('torsion-study').check()
   await expect(page.getByTestId('torsion-study-difference')).toContainText('%', { timeout: 20_000 })
   await page.getByTestId('torsion-field').check()

@@ -48,3 +48,9 @@ export async function dragMouse(page: Page, from: { x: number; y: number }, to: 
   for (let k = 1; k <= 8; k++) await page.mouse.move(from.x + ((to.x - from.x) * k) / 8, from.y + ((to.y - from.y) * k) / 8)
   await page.mouse.up()
 }
+
+/** Shows one group of the editor's right column (its panels are hidden behind the other tabs). */
+export async function showGroup(page: Page, group: 'section' | 'loads' | 'checks' | 'part'): Promise<void> {
+  await page.getByTestId(`group-tab-${group}`).click()
+  await expect(page.getByTestId(`group-tab-${group}`)).toHaveAttribute('aria-selected', 'true')
+}

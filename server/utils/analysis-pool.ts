@@ -24,6 +24,8 @@ interface Pending {
 
 interface Slot {
   worker: Worker
+  /** The worker has loaded its bundle (its start-up does not count against a job's time limit). */
+  ready: boolean
   busy: Pending | null
   timer: ReturnType<typeof setTimeout> | null
 }
@@ -55,37 +57,47 @@ const slots: Slot[] = []
 const queue: Pending[] = []
 const perAccount = new Map<string, number>()
 let nextId = 1
+/** An analysis request in progress; `overlapped` once another started while it was in flight. */
+interface InFlight {
+  overlapped: boolean
+}
 /** Analysis requests between the start of their handler and their answer (reading the body included). */
-let requestsInFlight = 0
-/** The connections of the last few analysis requests and when they started (ms, performance.now()). */
-const recentStarts: { socket: unknown; at: number }[] = []
-/** Another connection's analysis this recent (ms) means analyses arrive concurrently. */
-const CONCURRENT_MS = 50
+const inFlight = new Set<InFlight>()
+const requests = new WeakMap<H3Event, InFlight>()
+/** When the last analysis answer was handed to its connection (performance.now() ms), and which connection. */
+let lastAnswer: { socket: unknown; at: number } | null = null
+/**
+ * A request from another connection that starts this soon (ms) after an answer went out was
+ * already waiting behind it: a client's own next request needs at least a loopback round trip.
+ */
+const BACK_TO_BACK_MS = 0.15
 
-/** Runs an analysis request's handler, counted in `requestsInFlight` and `recentStarts` while it runs. */
+/** Runs an analysis request's handler, counted in `inFlight` while it runs. */
 export async function countedAnalysis<T>(event: H3Event, handle: () => Promise<T>): Promise<T> {
-  requestsInFlight++
-  recentStarts.push({ socket: event.node.req.socket, at: performance.now() })
-  if (recentStarts.length > 8) recentStarts.shift()
+  const socket = event.node.req.socket
+  const waited = lastAnswer !== null && lastAnswer.socket !== socket && performance.now() - lastAnswer.at < BACK_TO_BACK_MS
+  const mine: InFlight = { overlapped: inFlight.size > 0 || waited }
+  for (const other of inFlight) other.overlapped = true
+  inFlight.add(mine)
+  requests.set(event, mine)
+  event.node.res.once('finish', () => { lastAnswer = { socket, at: performance.now() } })
   try {
     return await handle()
   } finally {
-    requestsInFlight--
+    inFlight.delete(mine)
   }
 }
 
 /**
- * True when this is the only analysis request in progress, no other connection asked for one in
- * the last CONCURRENT_MS, and the pool is idle (and in-line runs are allowed): a small analysis
- * may then run on the event loop, as nothing waits behind it and a thread hop would only add to
- * its latency. Several clients at once go to the workers.
+ * True when no other analysis request was in progress at any time since this one started (nor
+ * waiting for the one before it to be answered), and the pool is idle (and in-line runs are allowed): a small analysis may then run on the event
+ * loop, as nothing waits behind it and a thread hop would only add to its latency. Requests that
+ * overlap (several clients, or one client's live and torsion requests) go to the workers.
  */
 export function aloneInFlight(event: H3Event): boolean {
   config ??= settings()
-  if (config.inlineVertices < 0 || requestsInFlight > 1 || queue.length > 0 || slots.some(s => s.busy)) return false
-  const now = performance.now()
-  const socket = event.node.req.socket
-  return !recentStarts.some(r => r.socket !== socket && now - r.at < CONCURRENT_MS)
+  const mine = requests.get(event)
+  return config.inlineVertices >= 0 && mine !== undefined && !mine.overlapped && queue.length === 0 && !slots.some(s => s.busy)
 }
 
 /** The bundled worker beside the built server (.output/server/workers/analysis.mjs), or null (development: run in-line). */
@@ -111,7 +123,7 @@ function release(p: Pending): void {
 }
 
 function spawn(file: string): Slot {
-  const slot: Slot = { worker: new Worker(file), busy: null, timer: null }
+  const slot: Slot = { worker: new Worker(file), ready: false, busy: null, timer: null }
   slot.worker.on('message', (reply: AnalysisReply) => finish(slot, reply))
   slot.worker.on('error', (error) => fail(slot, error))
   slot.worker.on('exit', () => fail(slot, new Error('the analysis worker stopped')))
@@ -138,9 +150,15 @@ function fail(slot: Slot, error: unknown): void {
 }
 
 function finish(slot: Slot, reply: AnalysisReply): void {
+  if ('ready' in reply) {
+    slot.ready = true
+    if (slot.busy && !slot.timer) arm(slot)
+    return
+  }
   const p = slot.busy
   if (!p || p.job.id !== reply.id) return
   if (slot.timer) clearTimeout(slot.timer)
+  slot.timer = null
   slot.busy = null
   release(p)
   if ('json' in reply) p.resolve({ json: Buffer.from(reply.json.buffer, reply.json.byteOffset, reply.json.byteLength) })
@@ -164,13 +182,19 @@ function pump(): void {
     const p = queue.shift()
     if (!p) return
     slot.busy = p
-    slot.timer = setTimeout(() => fail(slot, createError({
-      statusCode: 422,
-      statusMessage: 'Unprocessable Entity',
-      message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
-    })), config!.timeoutMs)
+    // A worker still loading holds the job in its port; the time limit starts once it is ready.
+    if (slot.ready) arm(slot)
     slot.worker.postMessage(p.job, [p.job.body.buffer as ArrayBuffer])
   }
+}
+
+/** Starts the time limit of the slot's job. */
+function arm(slot: Slot): void {
+  slot.timer = setTimeout(() => fail(slot, createError({
+    statusCode: 422,
+    statusMessage: 'Unprocessable Entity',
+    message: `The analysis took longer than ${config!.timeoutMs >= 1000 ? `${Math.round(config!.timeoutMs / 1000)} s` : `${config!.timeoutMs} ms`} and was stopped. Simplify the section: a coarser chord tolerance for arcs, or fewer parts.`,
+  })), config!.timeoutMs)
 }
 
 function busy(event: H3Event, message: string): never {

@@ -18,6 +18,7 @@ export interface AnalysisJob {
 
 /** What the worker answers: the answer as UTF-8 JSON, a geometry error, or an unexpected failure. */
 export type AnalysisReply =
+  | { ready: true; id?: undefined }
   | { id: number; json: Uint8Array }
   | { id: number; invalid: BodyProblem }
   | { id: number; sectionError: { message: string; part: number | null; ring: number | null; vertex: number | null; cut?: number | null } }
@@ -49,3 +50,6 @@ parentPort?.on('message', (job: AnalysisJob) => {
   }
   parentPort!.postMessage(reply, 'json' in reply ? [reply.json.buffer as ArrayBuffer] : [])
 })
+
+// Loaded: the pool sends work (and starts a job's time limit) only from here on.
+parentPort?.postMessage({ ready: true })

@@ -31,6 +31,21 @@ export interface PlacedLabel extends Box {
 }
 
 const FONT = '"IBM Plex Sans", sans-serif'
+/** Text widths by font and text: a drag repaints the same labels every frame, measured once. */
+const widths = new Map<string, number>()
+// A web font that arrives after the first paint changes every width: measure again.
+if (typeof document !== 'undefined') document.fonts?.addEventListener('loadingdone', () => widths.clear())
+function widthOf(ctx: CanvasRenderingContext2D, f: string, text: string): number {
+  const key = `${f}|${text}`
+  let w = widths.get(key)
+  if (w === undefined) {
+    if (widths.size > 4000) widths.clear()
+    ctx.font = f
+    w = ctx.measureText(text).width
+    widths.set(key, w)
+  }
+  return w
+}
 function font(l: SceneLabel): string {
   return `${l.weight === 'bold' ? '600 ' : l.weight === 'italic' ? 'italic ' : ''}${l.size ?? 11}px ${FONT}`
 }
@@ -43,9 +58,8 @@ export function paintLabels(ctx: Paint2D, labels: readonly SceneLabel[], X: (x: 
   const requests: LabelRequest[] = []
   const anchors: [number, number][] = []
   for (const l of labels) {
-    ctx.font = font(l)
     const size = l.size ?? 11
-    const w = ctx.measureText(l.text).width + 2
+    const w = widthOf(ctx, font(l), l.text) + 2
     const h = Math.round(size * 1.3)
     const ax = X(l.x, l.y)
     const ay = Y(l.x, l.y)

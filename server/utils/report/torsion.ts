@@ -45,14 +45,16 @@ export function torsionPage(doc: Doc, input: ReportInput): void {
   const width = doc.page.width - doc.page.margins.left - doc.page.margins.right
   const p = a.properties
   const ext = Math.max(p.bounds.maxX - p.bounds.minX, p.bounds.maxY - p.bounds.minY)
-  const sc = { x: cleanZero(t.shearCentre.x, ext), y: cleanZero(t.shearCentre.y, ext) }
-  const rel = { x: cleanZero(t.shearCentre.x - p.centroid.x, ext), y: cleanZero(t.shearCentre.y - p.centroid.y, ext) }
+  // The mesh places the shear centre to about 10^-4 of the section's size: below that is mesh noise.
+  const noise = (v: number) => (Math.abs(v) < 1e-4 * ext ? 0 : v)
+  const sc = { x: noise(cleanZero(t.shearCentre.x, ext)), y: noise(cleanZero(t.shearCentre.y, ext)) }
+  const rel = { x: noise(t.shearCentre.x - p.centroid.x), y: noise(t.shearCentre.y - p.centroid.y) }
   const tau = t.torsionStress
   const rows: [string, string][] = [
     ['J torsion constant', q(t.J, 'inertia', sys)],
     ['Cw warping constant (about the shear centre)', warpingText(t.Cw, sys)],
     ['Shear centre xs, ys', `${q(sc.x, 'length', sys)}, ${q(sc.y, 'length', sys)}`],
-    ['Shear centre from the centroid', `${q(rel.x, 'length', sys)}, ${q(rel.y, 'length', sys)}`],
+    ['Shear centre from the centroid (under 10^-4 of the size: 0)', `${q(rel.x, 'length', sys)}, ${q(rel.y, 'length', sys)}`],
     ['Shear area along x, along y', `${q(t.shearAreas.x, 'area', sys)}, ${q(t.shearAreas.y, 'area', sys)}`],
     ['Shear area / A along x, along y', `${(t.shearAreas.x / p.area).toFixed(3)}, ${(t.shearAreas.y / p.area).toFixed(3)}`],
     ['Max torsional shear stress per unit torque', stressPerTorqueText(tau.value, sys)],
@@ -79,7 +81,7 @@ export function torsionPage(doc: Doc, input: ReportInput): void {
   const study = t.study
   if (study) {
     table(doc, [{ header: 'Mesh study: density', width: 110 }, { header: 'Nodes', width: 60, align: 'right' }, { header: 'Elements', width: 60, align: 'right' }, { header: `J (${u('inertia', sys)})`, width: 100, align: 'right' }, { header: `Shear centre x, y (${u('length', sys)})`, width: width - 330, align: 'right' }],
-      study.rows.map(r => [r.density, String(r.nodes), String(r.elements), v(r.J, 'inertia', sys), `${v(cleanZero(r.shearCentre.x, ext), 'length', sys)}, ${v(cleanZero(r.shearCentre.y, ext), 'length', sys)}`]), 'Mesh study')
+      study.rows.map(r => [r.density, String(r.nodes), String(r.elements), v(r.J, 'inertia', sys), `${v(noise(cleanZero(r.shearCentre.x, ext)), 'length', sys)}, ${v(noise(cleanZero(r.shearCentre.y, ext)), 'length', sys)}`]), 'Mesh study')
     para(doc, `Mesh study: J differs by ${formatNumber(study.difference.J * 100, 3)} % and the shear centre moves by ${q(study.difference.shearCentre, 'length', sys)} between the two densities. ${convergenceWord(study)}`, 8)
   }
   connectionFlows(doc, input, width)
