@@ -1,7 +1,7 @@
 import { canvasPalette, type CanvasPalette } from '#shared/canvas/palette'
 
-/** The drawing's colours for the theme in use (the layout's `kw-dark` state), as one reactive palette. */
+/** The drawing's colours for the theme in use (stores/theme.ts), as one reactive palette. */
 export function useCanvasPalette(): ComputedRef<CanvasPalette> {
-  const dark = useState('kw-dark', () => false)
-  return computed(() => canvasPalette(dark.value))
+  const theme = useThemeStore()
+  return computed(() => canvasPalette(theme.dark))
 }

@@ -61,6 +61,7 @@ test('a box of four welded plates: the closed-cell welds show |q| from the FE sh
   const res = await page.request.post('/api/sketches', { headers: SAME_ORIGIN, data: { title: 'Welded box', document } })
   expect(res.status()).toBe(201)
   await open(page, `/sketches/${(await res.json()).id}`)
+  await showGroup(page, 'checks')
   await expect(page.getByTestId('torsion-panel')).toHaveAttribute('data-state', 'ready', { timeout: 20_000 })
   const rows = page.getByTestId('shear-row')
   await expect(rows).toHaveCount(4)
