@@ -11,6 +11,7 @@ import { snapLoadPoint } from '#shared/stress/frame'
 const HIT_PX = 7
 const LOAD_HIT_PX = 9
 const LOAD_SNAP_PX = 8
+const COMMENT_HIT_PX = 11
 
 /**
  * The canvas's one input path: DOM pointer events on the canvas box, hit-tested in mm by pure
@@ -26,6 +27,7 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
   const view = useViewportStore()
   const stress = useStressViewStore()
   const toasts = useToastStore()
+  const comments = useCommentsStore()
 
   const gesture = shallowRef<Gesture>({ kind: 'none' })
   const cue = shallowRef<Cue>(null)
@@ -92,6 +94,9 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     }
     if (e.button !== 0) return
     box.value!.setPointerCapture(e.pointerId)
+    // A comment marker under the pointer: its thread is focused (the page opens the list).
+    const marker = hitPoint(comments.markers, w, COMMENT_HIT_PX / view.zoom)
+    if (marker) { comments.focused = marker; return }
     const taken = stressGesture(w)
     if (taken) { gesture.value = taken; return }
     // A reader (view or comment share) pans and drags loads to explore; the parts stay as drawn.

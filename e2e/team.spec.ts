@@ -71,6 +71,11 @@ test('engineer shares and submits; the checker pins a comment and returns it; th
   expect(Math.abs(listed.comments[0]!.at!.x - 60)).toBeLessThan(3)
   expect(Math.abs(listed.comments[0]!.at!.y - 10)).toBeLessThan(3)
   await shot(checker, 'team-3-checker-comment-pinned')
+  // A click on the marker on the drawing focuses its thread in the list.
+  await expect(thread).toHaveAttribute('data-focused', 'false')
+  const m = (await canvasTransform(checker))(listed.comments[0]!.at!.x, listed.comments[0]!.at!.y)
+  await checker.mouse.click(m.x, m.y)
+  await expect(thread).toHaveAttribute('data-focused', 'true')
   await openTeam(checker, 'review')
   await checker.getByTestId('review-return-comment').fill('Show the weld size, then resubmit.')
   await checker.getByTestId('review-return').click()
