@@ -8,12 +8,22 @@ type Doc = InstanceType<typeof PDFDocument>
 export const CONTENT_TOP = 112
 
 /**
- * The status line of the title block: a working state is "not checked"; an approved revision
- * names who approved it and when (filled once revisions exist).
+ * The status line of the title block: an approved revision names who approved it and when; any
+ * other revision (frozen, submitted, returned) and the working state are "not checked".
  */
 export function statusText(input: ReportInput): string {
-  if (!input.approval) return 'NOT CHECKED (working state)'
-  return `Approved by ${input.approval.approvedBy} on ${input.approval.approvedAt.toISOString().slice(0, 10)}`
+  if (input.approval) return `Approved by ${input.approval.approvedBy} on ${input.approval.approvedAt.toISOString().slice(0, 10)}`
+  const r = input.revision
+  if (!r) return 'NOT CHECKED (working state)'
+  // The checker has a cell of its own; the status says where the review stands, short enough for its cell.
+  const state = r.status === 'submitted' ? 'submitted' : r.status === 'returned' ? 'returned' : 'frozen'
+  return `NOT CHECKED (revision ${r.number}, ${state})`
+}
+
+/** The revision cell: the approved or printed revision's number, else "working state". */
+export function revisionText(input: ReportInput): string {
+  const n = input.approval?.revision ?? input.revision?.number
+  return n === undefined ? 'working state' : String(n)
 }
 
 /**
@@ -28,7 +38,7 @@ export function drawTitleBlock(doc: Doc, input: ReportInput, index: number, coun
   const rowH = 22
   const cells: [string, string][][] = [
     [['Workspace', input.workspace], ['Project', input.project || '—'], ['Sketch', input.title]],
-    [['Revision', input.approval ? String(input.approval.revision) : 'working state'], ['Engineer', input.engineer], ['Checker', input.checker ?? '—']],
+    [['Revision', revisionText(input)], ['Engineer', input.engineer], ['Checker', input.checker ?? '—']],
     [['Status', statusText(input)], ['Date', input.date.toISOString().slice(0, 10)], ['Page', `${index + 1} of ${count}`]],
   ]
   const colW = width / 3

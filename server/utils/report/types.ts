@@ -21,6 +21,8 @@ export interface ReportInput {
   /** The checker's name, or null ("—") while nobody has checked it. */
   checker: string | null
   approval: ReportApproval | null
+  /** The revision the sheet prints (`?revision=N`) and its review status; null or absent for the working state. */
+  revision?: { number: number; status: string } | null
   date: Date
   doc: SketchDocument
   /** The analysis of `doc` under its shown loading (with `checkTable`, and `torsion` with its mesh study for the torsion page), or null with `analysisError`. */

@@ -41,6 +41,17 @@ describe('renderCalculationSheet', () => {
     expect(t).not.toContain('NOT CHECKED')
     expect(t).toMatch(/REVISION[\s\S]*4/)
   })
+  it('a submitted revision prints its number and its checker, and is "not checked"', async () => {
+    const t = await text({ ...base, checker: 'C. Hecker', revision: { number: 3, status: 'submitted' } })
+    expect(t).toContain('NOT CHECKED (revision 3, submitted)')
+    expect(t).toContain('C. Hecker')
+    expect(t).toMatch(/REVISION[\s\S]*3/)
+    expect(t).not.toContain('working state')
+  })
+  it('the working state is "not checked (working state)"', async () => {
+    const t = await text(base)
+    expect(t).toContain('NOT CHECKED (working state)')
+  })
   it('tabulates the check table: the strip row and the sums A = 100·10 and Ixx = 100·10³/12 (closed form b·h³/12)', async () => {
     const t = await text(base)
     expect(t).toContain('Check table')

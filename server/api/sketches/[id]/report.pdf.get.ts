@@ -53,6 +53,7 @@ export default defineEventHandler(async (event) => {
     approval: revision?.status === 'approved'
       ? { revision: revision.number, approvedBy: people.get(revision.approvedBy!)?.name ?? 'a former member', approvedAt: revision.approvedAt! }
       : null,
+    revision: revision ? { number: revision.number, status: revision.status } : null,
     date: new Date(),
     doc,
     analysis,
