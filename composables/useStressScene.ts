@@ -17,7 +17,8 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
   const view = useStressViewStore()
   const pal = useCanvasPalette()
   const fieldScale = useFieldScale()
-  const sketch = useSketchStore()
+  // The drawn parts (stores/display.ts): the dimension lines the labels keep clear of are those on screen.
+  const display = useDisplayStore()
   const viewport = useViewportStore()
   const workspace = useWorkspaceStore()
   return computed<StressScene>(() => {
@@ -163,7 +164,7 @@ export function useStressScene(zoom: () => number, viewBox: () => Bounds | null)
     if (legend) out.push(legend)
     // The scale bar in the canvas's bottom left corner (SketchScaleBar: bottom-3 left-3, about 230 × 40 px).
     out.push({ x: 0, y: viewport.height - 48, w: 240, h: 48 })
-    const b = sketch.bounds
+    const b = display.bounds
     if (!b) return out
     const [x0, y1] = viewport.toScreen(b.minX, b.minY)
     const [x1, y0] = viewport.toScreen(b.maxX, b.maxY)
