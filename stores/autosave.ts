@@ -3,6 +3,7 @@ import { computed, ref, watch } from 'vue'
 import type { SketchFull } from '#shared/sketch/api'
 import { errorMessage, errorStatus } from '#shared/utils/errors'
 import { useAccessStore } from './access'
+import { useDisplayStore } from './display'
 import { useSketchStore } from './sketch'
 
 /** Save state shown by the indicator. */
@@ -122,7 +123,10 @@ export const useAutosaveStore = defineStore('autosave', () => {
   }
 
   const running = ref(false)
-  watch(() => [sketch.revision, sketch.meta?.title], () => { if (running.value) schedule() })
+  // A gesture's change held for its analysis (stores/display.ts) shows as unsaved when it is drawn,
+  // with its numbers, not a frame before them.
+  const display = useDisplayStore()
+  watch(() => [sketch.revision, sketch.meta?.title, display.holding], () => { if (running.value && display.holding === null) schedule() })
 
   function beforeUnload(e: BeforeUnloadEvent): void {
     if (dirty.value && !access.readOnly) e.preventDefault()

@@ -32,8 +32,12 @@ export const useDisplayStore = defineStore('display', () => {
   let timer: ReturnType<typeof setTimeout> | null = null
 
   const bounds = computed(() => partsBounds(parts.value))
-  /** The numbers on screen are not those of the committed document yet. */
-  const pending = computed(() => shown.value.revision !== sketch.revision || analysis.busy)
+  /**
+   * The numbers on screen are not those of the committed document yet. While a gesture's change is
+   * held, the drawing and the numbers on screen are still the same state (the one before it), so
+   * nothing on screen changes until the pair advances.
+   */
+  const pending = computed(() => holding.value === null && (shown.value.revision !== sketch.revision || analysis.busy))
 
   /** The next committed change is a gesture's: hold its drawing for its analysis (see above). */
   function hold(): void {
