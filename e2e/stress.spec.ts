@@ -172,3 +172,41 @@ test('a cut line across the section plots the stress with end values and the zer
   await page.getByTestId('show-picker').selectOption({ label: 'Envelope of all combinations' })
   await shot(page, 'stress-envelope')
 })
+
+test('while a dragged vertex waits for its answer, the stress field is not repainted: it changes once, with the drawing', async ({ page }) => {
+  await signIn(page, 'engineer@millrace.test')
+  const id = await newSketch(page, 'Stress e2e held vertex', rectangleDocument())
+  await openStress(page, id)
+  await expect(page.getByTestId('tension-panel')).toHaveAttribute('data-state', 'inside')
+  // Every paint of the stress layer, with the drawn parts' revision on screen when it was painted.
+  await page.evaluate(() => {
+    const w = window as unknown as { Konva: { Layer: { prototype: { drawScene: (...a: unknown[]) => unknown } } }; kwPaints: string[] }
+    w.kwPaints = []
+    const layer = w.Konva.Layer.prototype
+    const draw = layer.drawScene
+    layer.drawScene = function (this: { name: () => string }, ...a: unknown[]) {
+      if (this.name() === 'stress-field') w.kwPaints.push(document.querySelector('[data-testid="sketch-canvas"]')!.getAttribute('data-parts-revision') ?? '')
+      return draw.apply(this, a)
+    }
+  })
+  const canvas = page.getByTestId('sketch-canvas')
+  const rev0 = await canvas.getAttribute('data-parts-revision')
+  const area0 = await page.getByTestId('prop-area').getAttribute('data-value')
+  const [px, py] = await toPage(page, -120, -80)
+  await page.mouse.click(px, py) // pick the part (away from the load on the centroid)
+  const [vx, vy] = await toPage(page, b / 2, -h / 2)
+  const [wx] = await toPage(page, b / 2 + 40, -h / 2)
+  await page.evaluate(() => { (window as unknown as { kwPaints: string[] }).kwPaints = [] })
+  await page.mouse.move(vx, vy)
+  await page.keyboard.down('Alt') // no snapping: the corner lands where the pointer does
+  await page.mouse.down()
+  for (let k = 1; k <= 8; k++) await page.mouse.move(vx + ((wx - vx) * k) / 8, vy)
+  await page.mouse.up()
+  await page.keyboard.up('Alt')
+  await expect(page.getByTestId('prop-area')).not.toHaveAttribute('data-value', area0!)
+  await expect(canvas).not.toHaveAttribute('data-parts-revision', rev0!)
+  await expect.poll(() => page.evaluate(() => (window as unknown as { kwPaints: string[] }).kwPaints.length)).toBeGreaterThan(0)
+  const paints = await page.evaluate(() => (window as unknown as { kwPaints: string[] }).kwPaints)
+  // Painted only for the new drawing: none while the drawing still showed the parts before the edit.
+  expect(paints.filter(r => r === rev0), 'stress paints while the change was held').toEqual([])
+})

@@ -82,12 +82,13 @@ async function benchVertexDrag(page, at, n, cdp, browser) {
       requestAnimationFrame(() => w.kwFrames.push(performance.now() - t))
     })
     canvas.addEventListener('pointerdown', () => { w.kwDragging = true })
-    window.addEventListener('pointerup', () => { w.kwDragging = false; w.kwUp = performance.now() }, true)
+    window.addEventListener('pointerup', () => { w.kwDragging = false; w.kwUp = performance.now(); performance.mark('kw-up') }, true)
     const area = document.querySelector('[data-testid="prop-area"]')
     w.kwSplit = []
     new MutationObserver(() => {
       if (!w.kwUp) return
       const now = performance.now()
+      performance.mark('kw-area')
       w.kwFollow.push(now - w.kwUp)
       const req = performance.getEntriesByType('resource').filter(e => e.name.includes('/api/analysis') && e.startTime >= w.kwUp).pop()
       if (req) w.kwSplit.push({ up: w.kwUp, now, start: req.startTime, end: req.responseEnd, server: req.serverTiming?.find(t => t.name === 'analysis')?.duration ?? NaN })
@@ -101,7 +102,7 @@ async function benchVertexDrag(page, at, n, cdp, browser) {
   const REPS = Number(process.env.BENCH_EDITS || 20)
   const WARMUP = 3
   if (cdp) { await cdp.send('Profiler.enable'); await cdp.send('Profiler.start') }
-  if (process.env.BENCH_TRACE) await browser.startTracing(page, { categories: ['devtools.timeline', 'blink', 'v8.execute', 'disabled-by-default-devtools.timeline'] })
+  if (process.env.BENCH_TRACE) await browser.startTracing(page, { categories: ['devtools.timeline', 'blink', 'blink.user_timing', 'v8.execute', 'disabled-by-default-devtools.timeline'] })
   for (let rep = 0; rep < WARMUP + REPS; rep++) {
     if (rep === WARMUP) await page.evaluate(() => { window.kwFrames = []; window.kwFollow = []; window.kwSplit = [] })
     // Where vertex 0 is now (snapping moves it off the pointer's path), from the vertex table (mm).
