@@ -1,22 +1,18 @@
 import type { Ref } from 'vue'
 import { SHAPES } from '#shared/shapes/registry'
-import { hitEdge, hitPoint, segmentDistance2 } from '#shared/editor/hit'
+import { hitEdge, segmentDistance2 } from '#shared/editor/hit'
 import { snapPoint, snapToGrid } from '#shared/editor/snap'
 import type { Point } from '#shared/geometry/types'
 import { angleDeg, draftPart, pickAt, ringsExcept, roundAngle, type Cue, type Gesture } from '#shared/editor/gesture'
 import { partsBounds } from '#shared/editor/parts'
-import { snapLoadPoint } from '#shared/stress/frame'
 
 /** Pick and snap tolerances on screen (px). */
 const HIT_PX = 7
-const LOAD_HIT_PX = 9
-const LOAD_SNAP_PX = 8
-const COMMENT_HIT_PX = 11
 
 /**
  * The canvas's one input path: DOM pointer events on the canvas box, hit-tested in mm by pure
- * helpers (parts, vertices, edges, the rotation handle, the stress view's load handles), turned
- * into gestures. No Konva node listens. A gesture that ends in a parts change (vertex drag, move,
+ * helpers (parts, vertices, edges, the rotation handle; comment markers, load handles and the cut
+ * line through useOverlayInput), turned into gestures. No Konva node listens. A gesture that ends in a parts change (vertex drag, move,
  * rotation) asks the display store to hold the drawing for its analysis (stores/display.ts); its
  * ghost stays drawn (`shown`) while it is held.
  */
@@ -25,9 +21,8 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
   const display = useDisplayStore()
   const selection = useSelectionStore()
   const view = useViewportStore()
-  const stress = useStressViewStore()
   const toasts = useToastStore()
-  const comments = useCommentsStore()
+  const overlay = useOverlayInput()
 
   const gesture = shallowRef<Gesture>({ kind: 'none' })
   const cue = shallowRef<Cue>(null)
@@ -71,17 +66,6 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     cue.value = null
   }
 
-  /** A pointer-down the stress view takes: a load handle under the pointer, or the cut line in cut mode. */
-  function stressGesture(w: Point): Gesture | null {
-    if (!stress.section) return null
-    if (stress.cutMode) {
-      stress.cut = { p0: [w[0], w[1]], p1: [w[0], w[1]] }
-      return { kind: 'cut', p0: w }
-    }
-    const id = hitPoint(stress.loads, w, LOAD_HIT_PX / view.zoom)
-    return id ? { kind: 'load', id } : null
-  }
-
   function onPointerDown(e: PointerEvent): void {
     box.value?.focus({ preventScroll: true })
     const s = local(e)
@@ -94,10 +78,8 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     }
     if (e.button !== 0) return
     box.value!.setPointerCapture(e.pointerId)
-    // A comment marker under the pointer: its thread is focused (the page opens the list).
-    const marker = hitPoint(comments.markers, w, COMMENT_HIT_PX / view.zoom)
-    if (marker) { comments.focused = marker; return }
-    const taken = stressGesture(w)
+    // A comment marker, the cut line or a load handle: the overlay's gestures come first.
+    const taken = overlay.press(w)
     if (taken) { gesture.value = taken; return }
     // A reader (view or comment share) pans and drags loads to explore; the parts stay as drawn.
     if (useAccessStore().readOnly) return
@@ -133,19 +115,6 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
     gesture.value = { kind: 'outline', points: [...pts, p], hover: p }
   }
 
-  /** Moves the dragged load for this frame (snapping to the centroid, the core's corners, the principal axes; Alt holds it off). */
-  function dragLoad(id: string, w: Point, e: PointerEvent): void {
-    const t0 = performance.now()
-    const s = stress.section
-    if (!s) return
-    const at: [number, number] = [w[0], w[1]]
-    const what = e.altKey ? null : snapLoadPoint(w[0], w[1], { centroid: [s.props.centroid.x, s.props.centroid.y], kern: s.kern, theta: s.props.theta }, LOAD_SNAP_PX / view.zoom, at)
-    stress.snap = what
-    stress.setDrag(id, at[0], at[1])
-    // For npm run bench:ui: derive the frame, paint the stress layer, and let Vue update the panels.
-    void nextTick(() => performance.measure('drag-update', { start: t0, end: performance.now() }))
-  }
-
   function onPointerMove(e: PointerEvent): void {
     const s = local(e)
     const w = view.toWorld(s[0], s[1])
@@ -156,10 +125,8 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
         gesture.value = { ...g, last: s }
         return
       case 'load':
-        return dragLoad(g.id, w, e)
       case 'cut':
-        stress.cut = { p0: [g.p0[0], g.p0[1]], p1: [w[0], w[1]] }
-        return
+        return overlay.move(g, w, e)
       case 'move': {
         let dx = w[0] - g.start[0]
         let dy = w[1] - g.start[1]
@@ -201,13 +168,7 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
   }
 
   function endGesture(g: Gesture): void {
-    if (g.kind === 'load') {
-      const end = stress.endDrag()
-      const load = sketch.loads.find(l => l.id === g.id)
-      if (end && load && (end.x !== load.x || end.y !== load.y)) sketch.moveLoad(g.id, end.x, end.y)
-      return
-    }
-    if (g.kind === 'cut') { stress.cutMode = false; return }
+    if (isOverlayGesture(g)) return overlay.end(g)
     settling.value = g
     const held = (g.kind === 'move' && g.moved) || (g.kind === 'vertex' && g.moved) || (g.kind === 'rotate' && g.angle !== 0)
     if (held) display.hold()
@@ -233,8 +194,7 @@ export function useCanvasInput(box: Ref<HTMLElement | null>) {
   /** Cancels the gesture in progress (Esc, a cancelled pointer); returns whether there was one. */
   function cancel(): boolean {
     const g = gesture.value
-    if (g.kind === 'load') stress.endDrag()
-    if (g.kind === 'cut') stress.cutMode = false
+    if (isOverlayGesture(g)) overlay.cancel(g)
     gesture.value = { kind: 'none' }
     cue.value = null
     return g.kind !== 'none'
