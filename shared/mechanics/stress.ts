@@ -201,29 +201,32 @@ export function kernMargin(kern: Ring, x: number, y: number): number | null {
   const n = kern.length
   if (n < 3 || !Number.isFinite(x) || !Number.isFinite(y)) return null
   let inside = Infinity
-  let outside = Infinity
+  // The nearest squared distance to an edge: one square root at the end (a load drag asks every frame).
+  let outside2 = Infinity
   let isOutside = false
   let p = kern[n - 1]!
   for (let i = 0; i < n; i++) {
     const q = kern[i]!
     const ux = q[0] - p[0]
     const uy = q[1] - p[1]
-    const L = Math.hypot(ux, uy)
-    if (L > 0) {
+    const L2 = ux * ux + uy * uy
+    if (L2 > 0) {
       const wx = x - p[0]
       const wy = y - p[1]
       // Left of a CCW edge is inside.
-      const side = (ux * wy - uy * wx) / L
+      const side = (ux * wy - uy * wx) / Math.sqrt(L2)
       if (side < 0) isOutside = true
       if (side < inside) inside = side
-      const t = Math.min(1, Math.max(0, (ux * wx + uy * wy) / (L * L)))
-      const dist = Math.hypot(wx - t * ux, wy - t * uy)
-      if (dist < outside) outside = dist
+      const t = Math.min(1, Math.max(0, (ux * wx + uy * wy) / L2))
+      const dx = wx - t * ux
+      const dy = wy - t * uy
+      const d2 = dx * dx + dy * dy
+      if (d2 < outside2) outside2 = d2
     }
     p = q
   }
   if (!Number.isFinite(inside)) return null
-  return isOutside ? -outside : inside
+  return isOutside ? -Math.sqrt(outside2) : inside
 }
 
 /** One material region for {@link sectionStress}: n = E / E_ref, its polygons (mm), and the index reported as `region`. */

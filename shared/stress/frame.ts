@@ -232,8 +232,12 @@ export function snapLoadPoint(x: number, y: number, t: LoadSnapTargets, tol: num
     out[1] = yc
     return 'centroid'
   }
+  // Squared distances: the core of a round section has thousands of vertices, asked every drag frame.
+  const tol2 = tol * tol
   for (const k of t.kern) {
-    if (Math.hypot(x - k[0], y - k[1]) <= tol) {
+    const dx = x - k[0]
+    const dy = y - k[1]
+    if (dx * dx + dy * dy <= tol2) {
       out[0] = k[0]
       out[1] = k[1]
       return 'core vertex'
