@@ -245,10 +245,10 @@ test('the check lists tension and compression against their own allowables, and 
   // K·L about u and v: the major axis u is x (Ixx = 400·600³/12 = 7.2 × 10⁹ mm⁴), the minor v is y
   // (Iyy = 600·400³/12 = 3.2 × 10⁹ mm⁴); r_u = sqrt(Ixx/A) = 173.2 mm, r_v = sqrt(Iyy/A) = 115.5 mm (closed form).
   await expect(page.getByTestId('torsional-note')).toContainText('Flexural-torsional')
+  // The second length typed straight after the first: neither is lost.
   await type(page.getByTestId('effective-length-u'), '6000')
-  // The first length is in (the panel re-rendered) before the second is typed.
-  await expect(page.getByTestId('klr-u')).toHaveText('34.6')   // 6000 / 173.2
   await type(page.getByTestId('effective-length-v'), '3000')
+  await expect(page.getByTestId('klr-u')).toHaveText('34.6')   // 6000 / 173.2
   await expect(page.getByTestId('klr-v')).toHaveText('26')     // 3000 / 115.47 = 25.98
   // Euler load π²·E·I/(KL)² with E = 5000 MPa: u 9 870 kN, v 17 546 kN, so u governs (closed form).
   expect(shownNumber(await page.getByTestId('euler-u').textContent()) / (Math.PI ** 2 * 5000 * 7.2e9 / 6000 ** 2 / 1000)).toBeCloseTo(1, 3)
