@@ -189,6 +189,15 @@ test('on a phone the drawing fills the width, the panels open as a sheet below, 
   const x = page.getByTestId('load-x-0')
   await expect.poll(async () => Number((await x.inputValue()).replace('\u2212', '-'))).toBeCloseTo(60 / zoom, -1)
   await shot(page, 'workspace-phone-dragged')
+
+  // The team panel opens on a phone too, across the width, and closes again.
+  await page.getByTestId('open-team').click()
+  const drawer = page.getByTestId('team-drawer')
+  await expect(drawer).toBeVisible()
+  expect((await drawer.boundingBox())!.width).toBeGreaterThan(385)
+  await shot(page, 'workspace-phone-team')
+  await drawer.getByRole('button', { name: 'Close the team panel' }).click()
+  await expect(drawer).toBeHidden()
   await context.close()
 })
 
