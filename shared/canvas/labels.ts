@@ -20,12 +20,13 @@ export function boxesOverlap(a: Box, b: Box, gap = 0): boolean {
 const STEP = 6
 const MAX_REACH = 84
 /** Offsets (px) on a STEP grid within MAX_REACH, nearest first: the places a label may move to. */
-const OFFSETS: readonly (readonly [number, number])[] = (() => {
-  const out: [number, number][] = []
+/** Each offset carries its length (px) third, so the search stops at a label's reach without a square root. */
+const OFFSETS: readonly (readonly [number, number, number])[] = (() => {
+  const out: [number, number, number][] = []
   const n = Math.floor(MAX_REACH / STEP)
-  for (let i = -n; i <= n; i++) for (let j = -n; j <= n; j++) if (Math.hypot(i, j) * STEP <= MAX_REACH) out.push([i * STEP, j * STEP])
+  for (let i = -n; i <= n; i++) for (let j = -n; j <= n; j++) if (Math.hypot(i, j) * STEP <= MAX_REACH) out.push([i * STEP, j * STEP, Math.hypot(i, j) * STEP])
   // Ties (same distance) prefer moving up and right, where labels are usually put.
-  return out.sort((p, q) => Math.hypot(p[0], p[1]) - Math.hypot(q[0], q[1]) || (q[0] - q[1]) - (p[0] - p[1]))
+  return out.sort((p, q) => p[2] - q[2] || (q[0] - q[1]) - (p[0] - p[1]))
 })()
 
 /**
@@ -44,14 +45,20 @@ export function placeLabels(labels: readonly LabelRequest[], area: Box, keepOut:
   for (const i of order) {
     const l = labels[i]!
     if (l.w > area.w || l.h > area.h) continue
-    for (const [ox, oy] of OFFSETS) {
-      if (Math.hypot(ox, oy) > l.reach) break
+    for (const [ox, oy, len] of OFFSETS) {
+      if (len > l.reach) break
       const c: Box = { x: clampX(l.x + ox, l.w), y: clampY(l.y + oy, l.h), w: l.w, h: l.h }
-      if (keepOut.some(k => boxesOverlap(c, k, gap)) || placed.some(p => boxesOverlap(c, p, gap))) continue
+      if (overlapsAny(c, keepOut, gap) || overlapsAny(c, placed, gap)) continue
       placed.push(c)
       out[i] = c
       break
     }
   }
   return out
+}
+
+/** True if `c` overlaps any of `boxes` (a plain loop: the search tries hundreds of places per label). */
+function overlapsAny(c: Box, boxes: readonly Box[], gap: number): boolean {
+  for (let k = 0; k < boxes.length; k++) if (boxesOverlap(c, boxes[k]!, gap)) return true
+  return false
 }
