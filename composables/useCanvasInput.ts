@@ -12,9 +12,9 @@ const HIT_PX = 7
 /**
  * The canvas's one input path: DOM pointer events on the canvas box, hit-tested in mm by pure
  * helpers (parts, vertices, edges, the rotation handle; comment markers, load handles and the cut
- * line through useOverlayInput), turned into gestures. No Konva node listens. A gesture that ends in a parts change (vertex drag, move,
- * rotation) asks the display store to hold the drawing for its analysis (stores/display.ts); its
- * ghost stays drawn (`shown`) while it is held.
+ * line through useOverlayInput), turned into gestures. No Konva node listens. A gesture that ends
+ * in a parts change (vertex drag, move, rotation) asks the display store to hold the drawing for
+ * its analysis (stores/display.ts); its ghost stays drawn (`shown`) while it is held.
  */
 export function useCanvasInput(box: Ref<HTMLElement | null>) {
   const sketch = useSketchStore()

@@ -19,12 +19,19 @@ export function boxesOverlap(a: Box, b: Box, gap = 0): boolean {
 
 const STEP = 6
 const MAX_REACH = 84
-/** Offsets (px) on a STEP grid within MAX_REACH, nearest first: the places a label may move to. */
-/** Each offset carries its length (px) third, so the search stops at a label's reach without a square root. */
+/**
+ * Offsets (px) on a STEP grid within MAX_REACH, nearest first: the places a label may move to. Each
+ * carries its length (px) third, so the search stops at a label's reach without a square root.
+ */
 const OFFSETS: readonly (readonly [number, number, number])[] = (() => {
   const out: [number, number, number][] = []
   const n = Math.floor(MAX_REACH / STEP)
-  for (let i = -n; i <= n; i++) for (let j = -n; j <= n; j++) if (Math.hypot(i, j) * STEP <= MAX_REACH) out.push([i * STEP, j * STEP, Math.hypot(i, j) * STEP])
+  for (let i = -n; i <= n; i++) {
+    for (let j = -n; j <= n; j++) {
+      const len = Math.hypot(i, j) * STEP
+      if (len <= MAX_REACH) out.push([i * STEP, j * STEP, len])
+    }
+  }
   // Ties (same distance) prefer moving up and right, where labels are usually put.
   return out.sort((p, q) => p[2] - q[2] || (q[0] - q[1]) - (p[0] - p[1]))
 })()
