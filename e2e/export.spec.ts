@@ -3,6 +3,25 @@ import DxfParser from 'dxf-parser'
 import { expect, test, type Page } from '@playwright/test'
 import { canvasTransform, open, shot, signIn } from './support/helpers'
 
+/** The RGB of a PNG at each pixel (x, y), decoded in the page. */
+async function pngPixels(page: Page, png: Buffer, points: [number, number][]): Promise<number[][]> {
+  return page.evaluate(async ({ b64, points }) => {
+    const img = new Image()
+    img.src = `data:image/png;base64,${b64}`
+    await img.decode()
+    const c = document.createElement('canvas')
+    c.width = img.width; c.height = img.height
+    const g = c.getContext('2d')!
+    g.drawImage(img, 0, 0)
+    return points.map(([x, y]) => Array.from(g.getImageData(x, y, 1, 1).data.slice(0, 3)))
+  }, { b64: png.toString('base64'), points })
+}
+
+/** True if an RGB triple is within 20 of each channel of a #rrggbb colour. */
+function near(rgb: number[], hex: string): boolean {
+  return rgb.every((v, i) => Math.abs(v - parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16)) < 20)
+}
+
 async function download(page: Page, testid: string): Promise<Buffer> {
   const wait = page.waitForEvent('download')
   await page.getByTestId('open-export').click()
@@ -39,21 +58,10 @@ test('exports of the brick pier: JSON re-imports, DXF reads back, PNG has its si
   expect([png.readUInt32BE(16), png.readUInt32BE(20)]).toEqual([1200, 800]) // IHDR width, height (PNG spec)
   // Decode in the page: the background is white; the pier carries no tension, so its legend runs from
   // zero pressure (top) to the peak compression (bottom), and no tension colour is drawn.
-  const px = await page.evaluate(async (b64) => {
-    const img = new Image()
-    img.src = `data:image/png;base64,${b64}`
-    await img.decode()
-    const c = document.createElement('canvas')
-    c.width = img.width; c.height = img.height
-    const g = c.getContext('2d')!
-    g.drawImage(img, 0, 0)
-    const at = (x: number, y: number) => Array.from(g.getImageData(x, y, 1, 1).data.slice(0, 3))
-    return { corner: at(5, 5), top: at(1022, 62), bottom: at(1022, 297) }
-  }, png.toString('base64'))
-  expect(px.corner).toEqual([255, 255, 255])
-  const near = (rgb: number[], hex: string) => rgb.every((v, i) => Math.abs(v - parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16)) < 20)
-  expect(near(px.top, '#f4f4f1'), `top ${px.top}`).toBe(true) // EXPORT_COLOURS.zero
-  expect(near(px.bottom, '#2f5fa7'), `bottom ${px.bottom}`).toBe(true) // EXPORT_COLOURS.compression
+  const [corner, top, bottom] = await pngPixels(page, png, [[5, 5], [1022, 62], [1022, 297]])
+  expect(corner).toEqual([255, 255, 255])
+  expect(near(top!, '#f4f4f1'), `top ${top}`).toBe(true) // EXPORT_COLOURS.zero
+  expect(near(bottom!, '#2f5fa7'), `bottom ${bottom}`).toBe(true) // EXPORT_COLOURS.compression
 
   const props = (await download(page, 'export-properties')).toString('utf8').split('\n')
   expect(props[0]).toBe('Property,Value,Unit')
@@ -131,19 +139,9 @@ test('SVG and PNG of the current view: the zoom and pan on screen, with the lege
   expect(png.subarray(1, 4).toString('latin1')).toBe('PNG')
   expect([png.readUInt32BE(16), png.readUInt32BE(20)]).toEqual([2 * w, 2 * h]) // IHDR: two pixels per screen pixel
   // Decoded: white where the view is empty (top left corner), the legend's compression colour at its foot.
-  const px = await page.evaluate(async ({ b64, legendX }) => {
-    const img = new Image()
-    img.src = `data:image/png;base64,${b64}`
-    await img.decode()
-    const c = document.createElement('canvas')
-    c.width = img.width; c.height = img.height
-    const g = c.getContext('2d')!
-    g.drawImage(img, 0, 0)
-    const at = (x: number, y: number) => Array.from(g.getImageData(x, y, 1, 1).data.slice(0, 3))
-    return { legendFoot: at(2 * (legendX + 12), 2 * 297) }
-  }, { b64: png.toString('base64'), legendX: w - 200 + 10 })
-  const near = (rgb: number[], hex: string) => rgb.every((v, i) => Math.abs(v - parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16)) < 20)
-  expect(near(px.legendFoot, '#2f5fa7'), `legend foot ${px.legendFoot}`).toBe(true) // EXPORT_COLOURS.compression
+  const legendX = w - 200 + 10
+  const [legendFoot] = await pngPixels(page, png, [[2 * (legendX + 12), 2 * 297]])
+  expect(near(legendFoot!, '#2f5fa7'), `legend foot ${legendFoot}`).toBe(true) // EXPORT_COLOURS.compression
   await page.setContent(svg)
   await shot(page, 'export-view-svg')
 })
